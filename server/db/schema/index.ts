@@ -1,0 +1,3 @@
+export * from './users';
+export * from './teams';
+export * from './mail';

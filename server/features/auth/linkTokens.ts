@@ -1,0 +1,11 @@
+import { createHash, randomBytes } from 'node:crypto';
+
+/** Link tokens go out by mail; only their SHA-256 is stored, so a database leak cannot replay them. */
+export function newLinkToken(): { token: string; hash: string } {
+  const token = randomBytes(32).toString('base64url');
+  return { token, hash: hashLinkToken(token) };
+}
+
+export function hashLinkToken(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}

@@ -1,0 +1,36 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { changeRoleBody, inviteBody } from '../../../shared/schemas/auth';
+import type { Db } from '../../db/client';
+import type { Env } from '../../env';
+import { parse } from '../../lib/parse';
+import { requireTeam, teamIdOf } from '../../middleware/guards';
+import type { Mailer } from '../mail/mailer';
+import { listTeamOutbox } from '../mail/outbox.service';
+import { changeRole, inviteMember, listMembers, removeMember } from './teams.service';
+
+const memberParams = z.object({ teamId: z.string().uuid(), userId: z.string().uuid('must be a user id') });
+
+export function teamsRouter(db: Db, env: Env, mailer: Mailer): Router {
+  const r = Router({ mergeParams: true });
+  r.get('/:teamId/members', requireTeam('team.read'), async (req, res) => {
+    res.json(await listMembers(db, teamIdOf(req)));
+  });
+  r.post('/:teamId/invitations', requireTeam('members.manage'), async (req, res) => {
+    const body = parse(inviteBody, req.body);
+    res.status(201).json(await inviteMember(db, mailer, env.APP_URL, teamIdOf(req), req.session!.user.id, body));
+  });
+  r.patch('/:teamId/members/:userId', requireTeam('members.manage'), async (req, res) => {
+    const { teamId, userId } = parse(memberParams, req.params);
+    res.json(await changeRole(db, teamId, userId, parse(changeRoleBody, req.body).role));
+  });
+  r.delete('/:teamId/members/:userId', requireTeam('members.manage'), async (req, res) => {
+    const { teamId, userId } = parse(memberParams, req.params);
+    await removeMember(db, teamId, userId);
+    res.status(204).end();
+  });
+  r.get('/:teamId/outbox', requireTeam('outbox.read'), async (req, res) => {
+    res.json(await listTeamOutbox(db, teamIdOf(req)));
+  });
+  return r;
+}

@@ -1,0 +1,91 @@
+import { and, eq, sql } from 'drizzle-orm';
+import type { Role } from '../../../shared/auth/permissions';
+import type { InviteBody, Member } from '../../../shared/schemas/auth';
+import type { Db } from '../../db/client';
+import { invitations, memberships, teams, users } from '../../db/schema';
+import { conflict, notFound } from '../../lib/httpError';
+import { newLinkToken } from '../auth/linkTokens';
+import type { Mailer } from '../mail/mailer';
+
+const INVITE_DAYS = 7;
+
+export async function listMembers(db: Db, teamId: string): Promise<Member[]> {
+  const rows = await db
+    .select({ userId: users.id, email: users.email, name: users.name, role: memberships.role, joinedAt: memberships.createdAt })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(eq(memberships.teamId, teamId))
+    .orderBy(users.name);
+  return rows.map((r) => ({ ...r, joinedAt: r.joinedAt.toISOString() }));
+}
+
+export async function inviteMember(
+  db: Db,
+  mailer: Mailer,
+  appUrl: string,
+  teamId: string,
+  invitedBy: string,
+  body: InviteBody,
+): Promise<{ id: string; email: string; role: Role; expiresAt: string }> {
+  const [already] = await db
+    .select({ id: users.id })
+    .from(users)
+    .innerJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.teamId, teamId)))
+    .where(eq(users.email, body.email));
+  if (already) throw conflict(`${body.email} is already a member of this team.`);
+  const [team] = await db.select({ name: teams.name }).from(teams).where(eq(teams.id, teamId));
+  const [inviter] = await db.select({ name: users.name }).from(users).where(eq(users.id, invitedBy));
+  const { token, hash } = newLinkToken();
+  const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
+  const [inv] = await db
+    .insert(invitations)
+    .values({ teamId, email: body.email, name: body.name, role: body.role, tokenHash: hash, invitedBy, expiresAt })
+    .returning({ id: invitations.id });
+  await mailer.send({
+    to: body.email,
+    teamId,
+    subject: `You are invited to the team "${team.name}" on Porelith`,
+    text:
+      `Hello ${body.name},\n\n${inviter?.name ?? 'A team admin'} invited you to join "${team.name}" on Porelith as ${body.role}.\n` +
+      `Open this link within ${INVITE_DAYS} days to set your password; it works once:\n\n` +
+      `${appUrl}/accept-invite?token=${token}\n`,
+  });
+  return { id: inv.id, email: body.email, role: body.role, expiresAt: expiresAt.toISOString() };
+}
+
+async function adminCount(db: Db, teamId: string): Promise<number> {
+  const [row] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(memberships)
+    .where(and(eq(memberships.teamId, teamId), eq(memberships.role, 'admin')));
+  return row.n;
+}
+
+async function currentRole(db: Db, teamId: string, userId: string): Promise<Role> {
+  const [m] = await db
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
+  if (!m) throw notFound('That member');
+  return m.role;
+}
+
+/** A team always keeps at least one admin, so it can never lock itself out. */
+export async function changeRole(db: Db, teamId: string, userId: string, role: Role): Promise<Member> {
+  const before = await currentRole(db, teamId, userId);
+  if (before === 'admin' && role !== 'admin' && (await adminCount(db, teamId)) <= 1) {
+    throw conflict('This is the team’s last admin; make someone else admin first.');
+  }
+  await db.update(memberships).set({ role }).where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
+  const member = (await listMembers(db, teamId)).find((m) => m.userId === userId);
+  if (!member) throw notFound('That member');
+  return member;
+}
+
+export async function removeMember(db: Db, teamId: string, userId: string): Promise<void> {
+  const role = await currentRole(db, teamId, userId);
+  if (role === 'admin' && (await adminCount(db, teamId)) <= 1) {
+    throw conflict('This is the team’s last admin; make someone else admin first.');
+  }
+  await db.delete(memberships).where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
+}

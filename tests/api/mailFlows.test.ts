@@ -1,0 +1,94 @@
+import supertest from 'supertest';
+import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { users } from '../../server/db/schema';
+import { linkToken, signedInAgent, startTestApp, waitForMail, type TestContext } from './support/testApp';
+
+let ctx: TestContext;
+beforeAll(async () => {
+  ctx = await startTestApp();
+});
+afterAll(() => ctx.close());
+
+describe('invitation by e-mail', () => {
+  it('admin invites → mail arrives in the fake over SMTP → set password → sign in; the link works once', async () => {
+    const email = `invitee-${Date.now()}@porelith.example`;
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const since = new Date(Date.now() - 1000);
+    const inv = await admin.post(`/api/teams/${ctx.demoTeamId}/invitations`).send({ email, name: 'New Colleague', role: 'geoscientist' });
+    expect(inv.status).toBe(201);
+    expect(inv.body).toMatchObject({ email, role: 'geoscientist' });
+
+    const mail = await waitForMail(ctx.db, email, since);
+    expect(mail.subject).toContain('Synthetic demo');
+    expect(mail.teamId).toBe(ctx.demoTeamId);
+    const token = linkToken(mail.textBody, '/accept-invite');
+
+    const outbox = await admin.get(`/api/teams/${ctx.demoTeamId}/outbox`);
+    expect(outbox.status).toBe(200);
+    expect(outbox.body.some((m: { to: string }) => m.to === email)).toBe(true);
+
+    const accept = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token, password: 'a-strong-password-1' });
+    expect(accept.status).toBe(200);
+    expect(accept.body.memberships).toEqual([{ teamId: ctx.demoTeamId, teamName: 'Synthetic demo', role: 'geoscientist' }]);
+
+    const again = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token, password: 'another-password-2' });
+    expect(again.status).toBe(400);
+    expect(again.body.error.code).toBe('invalid_token');
+
+    const signIn = await supertest(ctx.app).post('/api/auth/sign-in').send({ email, password: 'a-strong-password-1' });
+    expect(signIn.status).toBe(200);
+  });
+
+  it('refuses to invite someone who is already a member', async () => {
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const res = await admin.post(`/api/teams/${ctx.demoTeamId}/invitations`).send({ email: 'planner@porelith.example', name: 'P', role: 'viewer' });
+    expect(res.status).toBe(409);
+  });
+
+  it('refuses a made-up token and a too-short password by name', async () => {
+    const forged = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: 'x'.repeat(43), password: 'long-enough-password' });
+    expect(forged.status).toBe(400);
+    expect(forged.body.error.code).toBe('invalid_token');
+    const short = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: 'x'.repeat(43), password: 'short' });
+    expect(short.status).toBe(400);
+    expect(short.body.error.details).toEqual([{ path: 'password', message: 'must be at least 10 characters' }]);
+  });
+});
+
+describe('password reset', () => {
+  it('sends a single-use link; the new password works and the old one does not', async () => {
+    const email = `resetter-${Date.now()}@porelith.example`;
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const since = new Date(Date.now() - 1000);
+    await admin.post(`/api/teams/${ctx.demoTeamId}/invitations`).send({ email, name: 'Resetter', role: 'viewer' });
+    const invite = await waitForMail(ctx.db, email, since);
+    await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: linkToken(invite.textBody, '/accept-invite'), password: 'first-password-1' });
+
+    const since2 = new Date();
+    const req = await supertest(ctx.app).post('/api/auth/reset-request').send({ email });
+    expect(req.status).toBe(202);
+    const mail = await waitForMail(ctx.db, email, since2);
+    const token = linkToken(mail.textBody, '/reset-password');
+
+    const reset = await supertest(ctx.app).post('/api/auth/reset').send({ token, password: 'second-password-2' });
+    expect(reset.status).toBe(200);
+    expect(reset.body.user.email).toBe(email);
+    const reuse = await supertest(ctx.app).post('/api/auth/reset').send({ token, password: 'third-password-3' });
+    expect(reuse.status).toBe(400);
+
+    const oldPw = await supertest(ctx.app).post('/api/auth/sign-in').send({ email, password: 'first-password-1' });
+    expect(oldPw.status).toBe(401);
+    const newPw = await supertest(ctx.app).post('/api/auth/sign-in').send({ email, password: 'second-password-2' });
+    expect(newPw.status).toBe(200);
+  });
+
+  it('answers 202 for an unknown e-mail and sends nothing', async () => {
+    const email = 'nobody-here@porelith.example';
+    const res = await supertest(ctx.app).post('/api/auth/reset-request').send({ email });
+    expect(res.status).toBe(202);
+    await expect(waitForMail(ctx.db, email, new Date(Date.now() - 1000), 500)).rejects.toThrow(/no mail/);
+    const [u] = await ctx.db.select().from(users).where(eq(users.email, email));
+    expect(u).toBeUndefined();
+  });
+});

@@ -1,0 +1,91 @@
+import { eq } from 'drizzle-orm';
+import supertest from 'supertest';
+import { createApp } from '../../../server/app';
+import { createDb, type Db } from '../../../server/db/client';
+import { seedDemoAccounts, DEMO_PASSWORD } from '../../../server/db/seed/demoAccounts';
+import { parseEnv, type Env } from '../../../server/env';
+import { startMailFake } from '../../../server/features/mail/mailFake';
+import { createMailer, type Mailer } from '../../../server/features/mail/mailer';
+import { mailMessages, teams } from '../../../server/db/schema';
+
+export interface TestContext {
+  db: Db;
+  env: Env;
+  mailer: Mailer;
+  app: ReturnType<typeof createApp>;
+  demoTeamId: string;
+  close(): Promise<void>;
+}
+
+/**
+ * The real app on the throwaway PostGIS database that `npm test` created, with a real mail fake
+ * on a free loopback port. Overrides let a test tighten settings such as the sign-in rate limit.
+ */
+export async function startTestApp(overrides: Record<string, string> = {}): Promise<TestContext> {
+  const db = createDb(requiredDatabaseUrl(), 4);
+  const fake = await startMailFake(db, { port: 0 });
+  const env = parseEnv({
+    DATABASE_URL: requiredDatabaseUrl(),
+    JWT_SECRET: process.env.JWT_SECRET ?? 'test-secret-' + 'x'.repeat(40),
+    NODE_ENV: 'test',
+    LOG_LEVEL: 'silent',
+    SIGNIN_RATE_MAX: '1000',
+    SMTP_PORT: String(fake.port),
+    APP_URL: 'http://127.0.0.1:8080',
+    ...overrides,
+  });
+  const mailer = createMailer(env);
+  const app = createApp({ db, env, mailer, serveClient: false });
+  const demoTeamId = await seedDemoAccounts(db);
+  return {
+    db,
+    env,
+    mailer,
+    app,
+    demoTeamId,
+    async close() {
+      mailer.close();
+      await fake.close();
+      await db.$client.end();
+    },
+  };
+}
+
+function requiredDatabaseUrl(): string {
+  const url = process.env.DATABASE_URL;
+  if (!url) throw new Error('DATABASE_URL is not set: run the API tests through `npm test`.');
+  return url;
+}
+
+/** A supertest agent that keeps cookies, signed in as the given demo user. */
+export async function signedInAgent(ctx: TestContext, email: string, password = DEMO_PASSWORD) {
+  const agent = supertest.agent(ctx.app);
+  const res = await agent.post('/api/auth/sign-in').send({ email, password });
+  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return agent;
+}
+
+/** Waits for the mail fake to have stored a message to `to` newer than `since`. */
+export async function waitForMail(db: Db, to: string, since: Date, timeoutMs = 5000) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    const rows = await db.select().from(mailMessages).orderBy(mailMessages.receivedAt);
+    const hit = rows.reverse().find((m) => m.toAddresses.includes(to.toLowerCase()) && m.receivedAt >= since);
+    if (hit) return hit;
+    await new Promise((r) => setTimeout(r, 50));
+  }
+  throw new Error(`no mail to ${to} arrived within ${timeoutMs} ms`);
+}
+
+/** The token in the first Porelith link of a message body. */
+export function linkToken(text: string, path: '/accept-invite' | '/reset-password'): string {
+  const m = new RegExp(`${path}\\?token=([A-Za-z0-9_-]+)`).exec(text);
+  if (!m) throw new Error(`no ${path} link in: ${text}`);
+  return m[1];
+}
+
+/** A second team with its own admin, for cross-team checks. */
+export async function createOtherTeam(ctx: TestContext, name: string) {
+  const [t] = await ctx.db.insert(teams).values({ name }).onConflictDoNothing().returning();
+  return t ?? (await ctx.db.select().from(teams).where(eq(teams.name, name)))[0];
+}
