@@ -1,0 +1,16 @@
+export type { DataPoint, Target, Variogram, VariogramModel, VariogramLag } from './types';
+export { variogramValue, covariance, VARIOGRAM_MODELS } from './variogramModel';
+export { experimentalVariogram } from './experimentalVariogram';
+export type { ExperimentalVariogramOptions } from './experimentalVariogram';
+export { fitVariogram } from './fitVariogram';
+export type { FitVariogramOptions } from './fitVariogram';
+export { ordinaryKriging } from './ordinaryKriging';
+export type { KrigingOptions, KrigingEstimate } from './ordinaryKriging';
+export { idw } from './idw';
+export type { IdwOptions } from './idw';
+export { leaveOneOut } from './leaveOneOut';
+export type { LeaveOneOutMethod, LeaveOneOutResult, LeaveOneOutResidual } from './leaveOneOut';
+export { grid } from './grid';
+export type { Grid, GridOptions } from './grid';
+export { createNeighbourIndex } from './neighbours';
+export type { NeighbourIndex } from './neighbours';
