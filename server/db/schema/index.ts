@@ -1,3 +1,6 @@
 export * from './users';
 export * from './teams';
 export * from './mail';
+export * from './uploads';
+export * from './wells';
+export * from './wellData';

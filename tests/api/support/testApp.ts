@@ -89,3 +89,21 @@ export async function createOtherTeam(ctx: TestContext, name: string) {
   const [t] = await ctx.db.insert(teams).values({ name }).onConflictDoNothing().returning();
   return t ?? (await ctx.db.select().from(teams).where(eq(teams.name, name)))[0];
 }
+
+/**
+ * A fresh team with one member of the given role, signed in; each test file gets its own team so
+ * files never see each other's wells.
+ */
+export async function freshTeamAgent(ctx: TestContext, label: string, role: 'admin' | 'geoscientist' | 'planner' | 'viewer' = 'geoscientist') {
+  const { randomUUID } = await import('node:crypto');
+  const bcrypt = (await import('bcryptjs')).default;
+  const { users, memberships } = await import('../../../server/db/schema');
+  const suffix = randomUUID().slice(0, 8);
+  const team = await createOtherTeam(ctx, `${label} ${suffix}`);
+  const email = `${role}-${suffix}@porelith.example`;
+  const password = 'fresh-team-password';
+  const [user] = await ctx.db.insert(users).values({ email, name: `${label} ${role}`, passwordHash: await bcrypt.hash(password, 4) }).returning();
+  await ctx.db.insert(memberships).values({ teamId: team.id, userId: user.id, role });
+  const agent = await signedInAgent(ctx, email, password);
+  return { teamId: team.id, userId: user.id, email, password, agent };
+}
