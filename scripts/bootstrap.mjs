@@ -11,13 +11,14 @@ import { readOrCreateSecret } from './setup/secrets.mjs';
 import { run, say, fail, ROOT } from './setup/proc.mjs';
 
 const mode = process.argv[2] ?? 'start';
-if (!['start', 'dev', 'test', 'seed'].includes(mode)) fail(`Unknown mode "${mode}" (start, dev, test, seed).`);
+if (!['start', 'dev', 'test', 'seed', 'bench'].includes(mode)) fail(`Unknown mode "${mode}" (start, dev, test, seed, bench).`);
 
 const tsx = join(ROOT, 'node_modules', '.bin', 'tsx');
 
 async function main() {
   ensureNodeModules();
   if (mode === 'test') await runTests();
+  else if (mode === 'bench') await runBench();
   else await runApp();
 }
 
@@ -78,11 +79,9 @@ async function runApp() {
   }
 }
 
-/** Typecheck, a throwaway cluster, build, then every vitest project; the exit code is vitest's. */
-async function runTests() {
-  ensureDebianPackages({ postgres: !process.env.DATABASE_URL });
-  ensureChromium();
-  await run('npm', ['run', '--silent', 'typecheck'], { label: 'typecheck' });
+/** A throwaway cluster in a temporary folder on a free port, removed afterwards (or TEST_DATABASE_URL). */
+async function withThrowawayDatabase(fn) {
+  ensureDebianPackages({ postgres: !process.env.TEST_DATABASE_URL });
   let cluster = null;
   let tmp = null;
   let databaseUrl = process.env.TEST_DATABASE_URL;
@@ -100,18 +99,29 @@ async function runTests() {
       LOG_LEVEL: 'silent',
     };
     await run(tsx, ['server/db/setup.ts', '--demo'], { env, label: 'database' });
-    await run(join(ROOT, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { env, label: 'client build' });
-    const extra = process.argv.slice(3);
-    const code = await run(join(ROOT, 'node_modules', '.bin', 'vitest'), ['run', ...extra], {
-      env,
-      label: 'tests',
-      allowFailure: true,
-    });
-    process.exitCode = code;
+    return await fn(env);
   } finally {
     if (cluster) stopCluster(cluster);
     if (tmp) rmSync(tmp, { recursive: true, force: true });
   }
+}
+
+/** Typecheck, build, then every vitest project on a throwaway database; the exit code is vitest's. */
+async function runTests() {
+  ensureChromium();
+  await run('npm', ['run', '--silent', 'typecheck'], { label: 'typecheck' });
+  process.exitCode = await withThrowawayDatabase(async (env) => {
+    await run(join(ROOT, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { env, label: 'client build' });
+    const extra = process.argv.slice(3);
+    return run(join(ROOT, 'node_modules', '.bin', 'vitest'), ['run', ...extra], { env, label: 'tests', allowFailure: true });
+  });
+}
+
+/** Speed figures against reference runs, on a throwaway database for the sections that need one. */
+async function runBench() {
+  process.exitCode = await withThrowawayDatabase((env) =>
+    run(tsx, ['tests/bench/run.ts', ...process.argv.slice(3)], { env, label: 'bench', allowFailure: true }),
+  );
 }
 
 main().catch((err) => fail(err instanceof Error ? err.message : String(err)));

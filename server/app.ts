@@ -11,6 +11,8 @@ import { authRouter } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import type { Mailer } from './features/mail/mailer';
 import { teamsRouter } from './features/teams/teams.router';
+import { wellsRouter } from './features/wells/wells.router';
+import { importsRouter } from './features/imports/imports.router';
 import { createLogger } from './lib/logger';
 import { errorHandler, notFoundApi } from './middleware/errors';
 import { requireSession } from './middleware/guards';
@@ -63,7 +65,7 @@ export function createApp({ db, env, mailer, logger, serveClient = true }: AppDe
 
   app.use('/api/health', healthRouter(db));
   app.use('/api/auth', authRouter(db, env, mailer));
-  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer));
+  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db), importsRouter(db));
   app.use('/api', notFoundApi);
 
   const dist = resolve(env.PORELITH_DIST);

@@ -14,6 +14,7 @@ import type { z } from 'zod';
 import type { Db } from '../../db/client';
 import { formationTops, logCurves, pressureObservations, surveyStations, wells } from '../../db/schema';
 import { conflict, notFound } from '../../lib/httpError';
+import { UNIQUE_VIOLATION, pgErrorCode } from '../../lib/pgError';
 
 type ListQuery = z.output<typeof wellListQuery>;
 
@@ -239,8 +240,8 @@ export async function patchWell(db: Db, teamId: string, wellId: string, userId: 
     .set({ ...changes, updatedBy: userId, updatedAt: sql`now()`, version: sql`${wells.version} + 1` })
     .where(and(eq(wells.teamId, teamId), eq(wells.id, wellId), eq(wells.version, version)))
     .returning({ id: wells.id })
-    .catch((err: { code?: string }) => {
-      if (err.code === '23505') throw conflict('Another well in this team already has that name or UWI.');
+    .catch((err: unknown) => {
+      if (pgErrorCode(err) === UNIQUE_VIOLATION) throw conflict('Another well in this team already has that name or UWI.');
       throw err;
     });
   if (updated.length === 0) {

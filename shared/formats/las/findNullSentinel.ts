@@ -1,0 +1,93 @@
+import type { ProblemList } from '../problem';
+
+/** Null markers seen in log files (the standard names −9999, −999.25, −9999.25, §5.4; the rest: common practice, no source). */
+const COMMON_NULL_MARKERS = [-999.25, -9999.25, -999, -9999, -99999, -999.99, -9999.99, 9999, 99999];
+/** A run this long of one large negative value at the top or bottom of a curve is padding, not measurement. Common practice, no source. */
+const MIN_EDGE_RUN = 3;
+const LARGE = 999;
+
+interface Suspect {
+  count: number;
+  columns: string[];
+  firstLine: number;
+}
+
+/**
+ * Warns when a value other than the declared NULL recurs like a null marker: a common marker that occurs
+ * at least twice, or a large negative value repeated at the start or end of a curve. The values are not changed.
+ *
+ * @example
+ * warnOfNullSentinels([gr], ['GR'], lineOfRow, rowCount, -999.25, 14, warnings);
+ * // → warning "value -9999 occurs 6 times (GR) like a null marker, but NULL is -999.25 …"
+ */
+export function warnOfNullSentinels(
+  columns: Float64Array[],
+  mnemonics: string[],
+  lineOfRow: Int32Array,
+  rowCount: number,
+  nullValue: number,
+  nullLine: number,
+  warnings: ProblemList,
+): void {
+  const markers = new Set(COMMON_NULL_MARKERS.filter((v) => v !== nullValue));
+  const suspects = new Map<number, Suspect>();
+  const note = (value: number, count: number, column: string, line: number) => {
+    const s = suspects.get(value);
+    if (!s) {
+      suspects.set(value, { count, columns: [column], firstLine: line });
+      return;
+    }
+    s.count += count;
+    if (!s.columns.includes(column)) s.columns.push(column);
+    s.firstLine = Math.min(s.firstLine, line);
+  };
+
+  columns.forEach((values, k) => {
+    const counts = new Map<number, { count: number; firstLine: number }>();
+    for (let i = 0; i < rowCount; i++) {
+      const v = values[i];
+      if ((v <= -LARGE || v >= LARGE) && markers.has(v)) {
+        const c = counts.get(v);
+        if (c) {
+          c.count++;
+          c.firstLine = Math.min(c.firstLine, lineOfRow[i]);
+        } else counts.set(v, { count: 1, firstLine: lineOfRow[i] });
+      }
+    }
+    for (const [v, c] of counts) if (c.count >= 2) note(v, c.count, mnemonics[k], c.firstLine);
+    for (const run of edgeRuns(values, rowCount, markers)) {
+      if (counts.has(run.value) || run.value === nullValue) continue;
+      note(run.value, run.length, mnemonics[k], lineOfRow[run.start]);
+    }
+  });
+
+  for (const [value, s] of suspects) {
+    warnings.add(
+      s.firstLine,
+      `value ${value} occurs ${s.count} times (${s.columns.join(', ')}) like a null marker, but NULL is ${nullValue}` +
+        `${nullLine > 0 ? ` (line ${nullLine})` : ''}; check NULL in ~W`,
+      s.columns[0],
+    );
+  }
+}
+
+function edgeRuns(values: Float64Array, n: number, markers: Set<number>): { value: number; start: number; length: number }[] {
+  const runs: { value: number; start: number; length: number }[] = [];
+  if (n === 0) return runs;
+  let head = 1;
+  while (head < n && values[head] === values[0]) head++;
+  if (head >= MIN_EDGE_RUN && looksLikeMarker(values[0], markers)) runs.push({ value: values[0], start: 0, length: head });
+  if (head === n) return runs;
+  let tail = 1;
+  while (tail < n && values[n - 1 - tail] === values[n - 1]) tail++;
+  if (tail >= MIN_EDGE_RUN && looksLikeMarker(values[n - 1], markers)) {
+    if (values[n - 1] === values[0] && runs.length > 0) runs[0].length += tail;
+    else runs.push({ value: values[n - 1], start: n - tail, length: tail });
+  }
+  return runs;
+}
+
+/** Densities in kg/m3 and depths are large and positive; padding values are large and negative, or a known marker. */
+function looksLikeMarker(value: number, markers: Set<number>): boolean {
+  return value <= -LARGE || markers.has(value);
+}

@@ -1,0 +1,234 @@
+import { readFileSync } from 'node:fs';
+import { eq, sql } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { pressureObservations, surveyStations, uploads, wells } from '../../server/db/schema';
+import { freshTeamAgent, startTestApp, type TestContext } from './support/testApp';
+
+const fixture = (name: string) => readFileSync(`tests/fixtures/imports/${name}`);
+
+let ctx: TestContext;
+let team: Awaited<ReturnType<typeof freshTeamAgent>>;
+
+beforeAll(async () => {
+  ctx = await startTestApp();
+  team = await freshTeamAgent(ctx, 'Import tests', 'geoscientist');
+});
+afterAll(() => ctx.close());
+
+function post(name: string, kind: string, fields: Record<string, string> = {}, bytes = fixture(name)) {
+  let req = team.agent.post(`/api/teams/${team.teamId}/imports`).field('kind', kind);
+  for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
+  return req.attach('file', bytes, name);
+}
+
+async function counts() {
+  const [row] = await ctx.db.execute<{ wells: number; pressures: number; stations: number; uploads: number }>(sql`
+    SELECT (SELECT count(*)::int FROM ${wells} WHERE team_id = ${team.teamId}) AS wells,
+           (SELECT count(*)::int FROM ${pressureObservations} p JOIN ${wells} w ON w.id = p.well_id WHERE w.team_id = ${team.teamId}) AS pressures,
+           (SELECT count(*)::int FROM ${surveyStations} s JOIN ${wells} w ON w.id = s.well_id WHERE w.team_id = ${team.teamId}) AS stations,
+           (SELECT count(*)::int FROM ${uploads} WHERE team_id = ${team.teamId}) AS uploads`).then((r) => r.rows);
+  return row;
+}
+
+describe('well header CSV', () => {
+  it('previews without writing: mapping suggested from headers, units from header suffixes', async () => {
+    const before = await counts();
+    const res = await post('wells-good.csv', 'wells', { dryRun: 'true' });
+    expect(res.status).toBe(200);
+    expect(res.body.csv.columns).toEqual(
+      expect.arrayContaining([
+        { name: 'Well Name', field: 'name' },
+        { name: 'Longitude', field: 'x' },
+        { name: 'Latitude', field: 'y' },
+        { name: 'RT (m)', field: 'datumElevation', unit: 'm' },
+        { name: 'Water depth (m)', field: 'waterDepth', unit: 'm' },
+      ]),
+    );
+    expect(res.body.problems).toEqual([]);
+    expect(res.body.counts).toMatchObject({ records: 3, valid: 3, create: 3, update: 0 });
+    // RFC 4180: the quoted name keeps its comma, "" is a quote.
+    expect(res.body.preview[2]).toMatchObject({ name: 'TEST-3, sidetrack', operator: 'Quay "North" Ltd (synthetic)', action: 'create' });
+    expect(await counts()).toEqual(before);
+  });
+
+  it('commits in one go and the wells appear in the list with their location', async () => {
+    const res = await post('wells-good.csv', 'wells');
+    expect(res.status).toBe(201);
+    expect(res.body.outcome).toMatchObject({ created: 3, updated: 0 });
+    const list = await team.agent.get(`/api/teams/${team.teamId}/wells?q=TEST&sort=name`);
+    expect(list.body.total).toBe(3);
+    expect(list.body.items[0]).toMatchObject({ name: 'TEST-1', uwi: 'TX-0001', status: 'drilled', waterDepthM: 120, offshore: true });
+    expect(list.body.items[0].lon).toBeCloseTo(-101.2, 9);
+    expect(list.body.items[0].lat).toBeCloseTo(-32.4, 9);
+  });
+
+  it('detects a re-import of the same file: 409 unless the user chooses update or skip', async () => {
+    const again = await post('wells-good.csv', 'wells');
+    expect(again.status).toBe(409);
+    expect(again.body.error.details.duplicateOf.fileName).toBe('wells-good.csv');
+    const before = await counts();
+    const skip = await post('wells-good.csv', 'wells', { onDuplicate: 'skip' });
+    expect(skip.status).toBe(201);
+    expect(skip.body.skipped).toBe(true);
+    expect(await counts()).toEqual(before);
+    const update = await post('wells-good.csv', 'wells', { onDuplicate: 'update' });
+    expect(update.body.outcome).toMatchObject({ created: 0, updated: 3, reimportOf: again.body.error.details.duplicateOf.uploadId });
+    expect((await counts()).wells).toBe(before.wells);
+  });
+
+  it('reports every bad row by line and column, and writes nothing', async () => {
+    const before = await counts();
+    const res = await post('wells-bad.csv', 'wells');
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe('import_has_problems');
+    expect(res.body.error.details).toEqual([
+      { line: 3, column: 'Longitude', message: "'abc' is not a number" },
+      { line: 6, column: 'Latitude', message: 'Latitude or northing is required' },
+      { line: 4, column: 'x', message: 'latitude -132.4 is outside −90..90' },
+      { line: 5, column: 'name', message: 'duplicate well "BAD-1" (first at line 2)' },
+    ]);
+    expect(await counts()).toEqual(before);
+  });
+
+  it('imports the valid rows only when asked, recording the skipped lines in the upload', async () => {
+    const res = await post('wells-bad.csv', 'wells', { skipInvalid: 'true' });
+    expect(res.status).toBe(201);
+    expect(res.body.outcome.created).toBe(1);
+    expect(res.body.outcome.skippedLines).toEqual([3, 4, 5, 6]);
+    const [up] = await ctx.db.select().from(uploads).where(eq(uploads.id, res.body.outcome.uploadId));
+    expect((up.outcome as { skippedLines: number[] }).skippedLines).toEqual([3, 4, 5, 6]);
+    expect(up.content.equals(fixture('wells-bad.csv'))).toBe(true);
+  });
+
+  it('reads semicolon-delimited files with decimal commas', async () => {
+    const res = await post('wells-semicolon.csv', 'wells', { dryRun: 'true' });
+    expect(res.body.csv).toMatchObject({ delimiter: ';', decimalComma: true });
+    expect(res.body.preview[0]).toMatchObject({ name: 'SEMI-1', lon: -101.25, lat: -32.41, waterDepthM: 120.5 });
+  });
+
+  it('accepts Latin-1 text', async () => {
+    const res = await post('wells-latin1.csv', 'wells', { dryRun: 'true' });
+    expect(res.body.csv.encoding).toBe('windows-1252');
+    expect(res.body.preview[0].operator).toBe('Société Pétrolière (synthetic)');
+  });
+
+  it('converts projected coordinates with their EPSG code (WGS 84 / UTM 13S)', async () => {
+    const csv = Buffer.from('name,easting,northing\nUTM-1,500000,6400000\n');
+    const res = await post('utm.csv', 'wells', { dryRun: 'true', epsg: '32713' }, csv);
+    expect(res.body.problems).toEqual([]);
+    // Zone 13 central meridian is 105°W; the false easting sits on it (UTM definition, value recalled from memory).
+    expect(res.body.preview[0].lon).toBeCloseTo(-105, 6);
+    expect(res.body.preview[0].lat).toBeLessThan(-32);
+  });
+
+  it('names a required field no column maps to', async () => {
+    const res = await post('wells-missing-columns.csv', 'wells');
+    expect(res.status).toBe(422);
+    expect(res.body.error.details).toEqual([
+      { line: 1, message: 'no column is mapped to the required field "Longitude or easting" (x)' },
+      { line: 1, message: 'no column is mapped to the required field "Latitude or northing" (y)' },
+    ]);
+  });
+
+  it('refuses empty, binary, unknown-kind and missing files clearly', async () => {
+    const empty = await post('empty.csv', 'wells', {}, Buffer.from(''));
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.message).toBe('empty.csv is empty.');
+    const binary = await post('binary.bin', 'wells');
+    expect(binary.status).toBe(400);
+    expect(binary.body.error.message).toBe('binary.bin: File looks binary, not text');
+    const kind = await post('wells-good.csv', 'rocks');
+    expect(kind.status).toBe(400);
+    expect(kind.body.error.details[0]).toEqual({ path: 'kind', message: 'must be one of wells, surveys, pressures, tops, las' });
+    const none = await team.agent.post(`/api/teams/${team.teamId}/imports`).field('kind', 'wells');
+    expect(none.status).toBe(400);
+    expect(none.body.error.details).toEqual([{ path: 'file', message: 'is required' }]);
+  });
+});
+
+describe('surveys and pressures', () => {
+  it('computes minimum-curvature TVD from a survey, and pressure TVDs from it', async () => {
+    const survey = await post('survey-good.csv', 'surveys');
+    expect(survey.status).toBe(201);
+    expect(survey.body.outcome).toMatchObject({ created: 6, wells: 1 });
+    const wellsRes = await team.agent.get(`/api/teams/${team.teamId}/wells?q=TEST-2`);
+    const wellId = wellsRes.body.items[0].id;
+    const stations = await team.agent.get(`/api/teams/${team.teamId}/wells/${wellId}/surveys`);
+    // Straight hold from 2000 m to 4100 m at 30°: ΔTVD = 2100·cos 30° exactly (geometry).
+    expect(stations.body[5].tvdM - stations.body[4].tvdM).toBeCloseTo(2100 * Math.cos(Math.PI / 6), 6);
+
+    const res = await post('pressures-mixed.csv', 'pressures');
+    expect(res.status).toBe(201);
+    expect(res.body.outcome.created).toBe(4);
+    const pressures = await team.agent.get(`/api/teams/${team.teamId}/wells/${wellId}/pressures`);
+    const mud = pressures.body.find((p: { kind: string }) => p.kind === 'mud_weight');
+    const lot = pressures.body.find((p: { kind: string }) => p.kind === 'lot');
+    // Vertical to 500 m, then building: at 2000 m MD the TVD is less than MD.
+    expect(mud.tvdM).toBeLessThan(2000);
+    expect(mud.tvdM).toBeCloseTo(stations.body[4].tvdM, 6);
+    // 1.25 sg mud: EMW 1250 kg/m³; pressure = ρ·g·TVD (g = 9.80665, standard gravity).
+    expect(mud.emwKgM3).toBeCloseTo(1250, 6);
+    expect(mud.valueSi).toBeCloseTo(1250 * 9.80665 * mud.tvdM, 3);
+    // 16.5 ppg: 1 ppg = 119.8264 kg/m³ (12/231 psi/ft per ppg; NIST US gallon).
+    expect(lot.emwKgM3).toBeCloseTo(16.5 * 119.826427, 3);
+    expect(lot.unitEntered).toBe('ppg');
+  });
+
+  it('converts psi and MPa values to Pa exactly', async () => {
+    const wellsRes = await team.agent.get(`/api/teams/${team.teamId}/wells?q=TEST-1`);
+    const pressures = await team.agent.get(`/api/teams/${team.teamId}/wells/${wellsRes.body.items[0].id}/pressures`);
+    const [a, b] = pressures.body;
+    expect(a.valueSi).toBeCloseTo(3000 * 6894.757293168, 3); // 1 psi = 6894.757293168 Pa (NIST SP 811)
+    expect(b.valueSi).toBeCloseTo(27.5e6, 3);
+    expect(b.quality).toBe('tight');
+    expect(b.kind).toBe('formation_test');
+  });
+
+  it('names an unknown well and a value whose unit must be wrong', async () => {
+    const csv = Buffer.from('well,kind,md (m),value,unit\nNOPE-9,kick,1000,1.2,sg\nTEST-1,kick,1000,9000,sg\n');
+    const res = await post('bad-pressures.csv', 'pressures', {}, csv);
+    expect(res.status).toBe(422);
+    expect(res.body.error.details).toEqual([
+      { line: 2, column: 'well', message: 'no well named or numbered "NOPE-9" in this team; import its header first' },
+      { line: 3, column: 'value', message: '9000 sg at 1000 m TVD is an EMW of 9000.00 sg — outside 0.5–3.0 sg; is the unit right?' },
+    ]);
+  });
+
+  it('reports progress for an import run as a job', async () => {
+    const lines = ['well,md (m),inc,azi'];
+    for (let i = 0; i <= 3000; i++) lines.push(`"TEST-3, sidetrack",${i * 1.5},${Math.min(45, i * 0.02)},120`);
+    const csv = Buffer.from(lines.join('\n'));
+    const start = await post('long-survey.csv', 'surveys', { async: 'true' }, csv);
+    expect(start.status).toBe(202);
+    let job;
+    for (let i = 0; i < 100; i++) {
+      job = (await team.agent.get(`/api/teams/${team.teamId}/imports/jobs/${start.body.jobId}`)).body;
+      if (job.state !== 'running') break;
+      await new Promise((r) => setTimeout(r, 100));
+    }
+    expect(job.error).toBeUndefined();
+    expect(job.state).toBe('done');
+    expect(job.phase).toBe('finished');
+    expect(job.total).toBe(3001);
+    expect(job.result.outcome.created).toBe(3001);
+  });
+});
+
+describe('permissions', () => {
+  it('lets a viewer see the upload history but not import', async () => {
+    const viewer = await freshTeamAgent(ctx, 'Viewer import tests', 'viewer');
+    const res = await viewer.agent.post(`/api/teams/${viewer.teamId}/imports`).field('kind', 'wells').attach('file', fixture('wells-good.csv'), 'w.csv');
+    expect(res.status).toBe(403);
+    expect((await viewer.agent.get(`/api/teams/${viewer.teamId}/imports`)).status).toBe(200);
+  });
+
+  it('keeps team B out of team A: no import, no reading', async () => {
+    const other = await freshTeamAgent(ctx, 'Other import team', 'admin');
+    const res = await other.agent.post(`/api/teams/${team.teamId}/imports`).field('kind', 'wells').attach('file', fixture('wells-good.csv'), 'w.csv');
+    expect(res.status).toBe(403);
+    expect((await other.agent.get(`/api/teams/${team.teamId}/wells`)).status).toBe(403);
+    expect((await other.agent.get(`/api/teams/${team.teamId}/imports`)).status).toBe(403);
+    // and their own list holds none of team A's wells
+    expect((await other.agent.get(`/api/teams/${other.teamId}/wells`)).body.total).toBe(0);
+  });
+});
