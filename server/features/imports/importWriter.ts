@@ -1,8 +1,9 @@
-import { and, eq, inArray, sql } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import type { LasFile } from '../../../shared/formats/las';
 import { computeSurvey } from '../../../shared/trajectory';
 import type { Db } from '../../db/client';
-import { formationTops, logCurves, pressureObservations, surveyStations, wells } from '../../db/schema';
+import { formationTops, logCurves, pressureObservations, surveyStations } from '../../db/schema';
+import { bulkInsert, bulkUpdate, type BulkColumn } from '../../lib/bulkInsert';
 import { ewktPoint } from '../../db/schema/geometry';
 import type { PressurePlanRow, SurveyPlan, TopPlanRow, WellPlanRow } from './csvPlans';
 import type { Progress } from './importJobs';
@@ -11,52 +12,79 @@ import { tvdFromSurvey } from './wellLookup';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
-/** Rows per INSERT: well under PostgreSQL's 65,535 bind parameters for our widest table. */
-const CHUNK = 2000;
+const WELL_COLUMNS: BulkColumn[] = [
+  ['name', 'text'],
+  ['uwi', 'text'],
+  ['operator', 'text'],
+  // PostGIS separates geometry array elements with ':', so EWKT travels as text and is cast per row.
+  ['location', 'text', '$value::geometry'],
+  ['surface_x', 'float8'],
+  ['surface_y', 'float8'],
+  ['surface_epsg', 'int'],
+  ['datum_elevation_m', 'float8'],
+  ['datum_kind', 'text'],
+  ['ground_elevation_m', 'float8'],
+  ['water_depth_m', 'float8'],
+  ['air_gap_m', 'float8'],
+  ['offshore', 'boolean'],
+  ['spud_date', 'date'],
+  ['td_md_m', 'float8'],
+  ['td_tvd_m', 'float8'],
+  ['status', 'well_status'],
+  ['note', 'text'],
+  ['updated_by', 'uuid'],
+  ['updated_upload_id', 'uuid'],
+];
+// A re-import may leave these blank: keep what the well had rather than wiping it.
+const KEEP_WHEN_BLANK = new Set(['datum_elevation_m', 'datum_kind', 'offshore', 'status']);
 
-async function inChunks<T>(rows: T[], phase: string, progress: Progress, write: (chunk: T[]) => Promise<unknown>) {
-  for (let i = 0; i < rows.length; i += CHUNK) {
-    await write(rows.slice(i, i + CHUNK));
-    progress(phase, Math.min(rows.length, i + CHUNK), rows.length);
-  }
+function wellValues(r: WellPlanRow, userId: string, uploadId: string, defaults: boolean): unknown[] {
+  return [
+    r.name,
+    r.uwi,
+    r.operator,
+    ewktPoint(r.lon, r.lat),
+    r.surfaceX,
+    r.surfaceY,
+    r.surfaceEpsg,
+    r.datumElevationM ?? (defaults ? 0 : null),
+    r.datumKind?.toUpperCase() ?? (defaults ? 'RT' : null),
+    r.groundElevationM,
+    r.waterDepthM,
+    r.airGapM,
+    r.offshore ?? (defaults ? false : null),
+    r.spudDate,
+    r.tdMdM,
+    r.tdTvdM,
+    r.status ?? (defaults ? 'drilled' : null),
+    r.note,
+    userId,
+    uploadId,
+  ];
 }
 
 export async function writeWells(tx: Tx, teamId: string, userId: string, uploadId: string, rows: WellPlanRow[], progress: Progress) {
   const toInsert = rows.filter((r) => !r.existingId);
   const toUpdate = rows.filter((r) => r.existingId);
-  const columns = (r: WellPlanRow) => ({
-    name: r.name,
-    uwi: r.uwi,
-    operator: r.operator,
-    location: ewktPoint(r.lon, r.lat),
-    surfaceX: r.surfaceX,
-    surfaceY: r.surfaceY,
-    surfaceEpsg: r.surfaceEpsg,
-    ...(r.datumElevationM !== null && { datumElevationM: r.datumElevationM }),
-    ...(r.datumKind !== null && { datumKind: r.datumKind.toUpperCase() }),
-    groundElevationM: r.groundElevationM,
-    waterDepthM: r.waterDepthM,
-    airGapM: r.airGapM,
-    ...(r.offshore !== null && { offshore: r.offshore }),
-    spudDate: r.spudDate,
-    tdMdM: r.tdMdM,
-    tdTvdM: r.tdTvdM,
-    ...(r.status !== null && { status: r.status }),
-    note: r.note,
-    updatedBy: userId,
-    updatedUploadId: uploadId,
-  });
-  await inChunks(toInsert, 'writing new wells', progress, (chunk) =>
-    tx.insert(wells).values(chunk.map((r) => ({ ...columns(r), teamId, createdBy: userId, createdUploadId: uploadId }))),
+  await bulkInsert(
+    tx,
+    'wells',
+    [['team_id', 'uuid'], ['created_by', 'uuid'], ['created_upload_id', 'uuid'], ...WELL_COLUMNS],
+    toInsert.map((r) => [teamId, userId, uploadId, ...wellValues(r, userId, uploadId, true)]),
+    (done, total) => progress('writing new wells', done, total),
   );
-  let done = 0;
-  for (const r of toUpdate) {
-    await tx
-      .update(wells)
-      .set({ ...columns(r), updatedAt: sql`now()`, version: sql`${wells.version} + 1` })
-      .where(and(eq(wells.teamId, teamId), eq(wells.id, r.existingId!)));
-    if (++done % 200 === 0) progress('updating wells', done, toUpdate.length);
-  }
+  await bulkUpdate(
+    tx,
+    'wells',
+    ['id', 'uuid'],
+    [
+      ...WELL_COLUMNS.map(([name, type, expression]) => [name, type, KEEP_WHEN_BLANK.has(name) ? `COALESCE($value, t.${name})` : expression] as const),
+      ['version', 'int', 't.version + 1'],
+      ['updated_at', 'timestamptz', 'now()'],
+    ],
+    toUpdate.map((r) => [r.existingId, ...wellValues(r, userId, uploadId, false), null, null]),
+  );
+  progress('updating wells', toUpdate.length, toUpdate.length);
   return { created: toInsert.length, updated: toUpdate.length };
 }
 
@@ -64,46 +92,54 @@ export async function writeWells(tx: Tx, teamId: string, userId: string, uploadI
 export async function writeSurveys(tx: Tx, uploadId: string, plans: SurveyPlan[], progress: Progress) {
   const wellIds = plans.map((p) => p.wellId);
   await tx.delete(surveyStations).where(inArray(surveyStations.wellId, wellIds));
-  const rows = plans.flatMap((p) => p.stations.map((s, seq) => ({ wellId: p.wellId, seq, uploadId, ...s })));
-  await inChunks(rows, 'writing survey stations', progress, (chunk) => tx.insert(surveyStations).values(chunk));
+  const rows = plans.flatMap((p) =>
+    p.stations.map((s, seq) => [p.wellId, seq, s.mdM, s.incDeg, s.aziDeg, s.tvdM, s.northM, s.eastM, s.doglegDegPer30m, uploadId]),
+  );
+  await bulkInsert(
+    tx,
+    'survey_stations',
+    [['well_id', 'uuid'], ['seq', 'int'], ['md_m', 'float8'], ['inc_deg', 'float8'], ['azi_deg', 'float8'], ['tvd_m', 'float8'], ['north_m', 'float8'], ['east_m', 'float8'], ['dogleg_deg_per30m', 'float8'], ['upload_id', 'uuid']],
+    rows,
+    (done, total) => progress('writing survey stations', done, total),
+  );
+  const surveys = new Map(plans.map((p) => [p.wellId, computeSurvey(p.stations)]));
   let retvd = 0;
-  for (const p of plans) {
-    const survey = computeSurvey(p.stations);
-    for (const table of [pressureObservations, formationTops] as const) {
-      const dependent = await tx
-        .select({ id: table.id, mdM: table.mdM })
-        .from(table)
-        .where(and(eq(table.wellId, p.wellId), eq(table.tvdFromSurvey, true)));
-      for (const d of dependent) {
-        const tvdM = tvdFromSurvey(survey, d.mdM);
-        if (table === pressureObservations) {
-          // The pressure stays as measured; its EMW follows the new TVD.
-          await tx
-            .update(pressureObservations)
-            .set({ tvdM, emwKgM3: sql`${pressureObservations.pressurePa} / (9.80665 * ${tvdM})` })
-            .where(eq(pressureObservations.id, d.id));
-        } else {
-          await tx.update(formationTops).set({ tvdM }).where(eq(formationTops.id, d.id));
-        }
-        retvd++;
-      }
-    }
+  for (const table of [pressureObservations, formationTops] as const) {
+    const dependent = await tx
+      .select({ id: table.id, wellId: table.wellId, mdM: table.mdM })
+      .from(table)
+      .where(and(inArray(table.wellId, wellIds), eq(table.tvdFromSurvey, true)));
+    const updates = dependent.map((d) => [d.id, tvdFromSurvey(surveys.get(d.wellId), d.mdM)]);
+    // The pressure stays as measured; its EMW follows the new TVD.
+    const extra = table === pressureObservations ? ([['emw_kg_m_3', 'float8', `t.pressure_pa / (9.80665 * u.c1)`]] as const) : [];
+    await bulkUpdate(tx, table === pressureObservations ? 'pressure_observations' : 'formation_tops', ['id', 'uuid'], [['tvd_m', 'float8'], ...extra], updates.map((u) => (extra.length ? [...u, null] : u)));
+    retvd += updates.length;
   }
   return { created: rows.length, wells: plans.length, tvdRecomputed: retvd };
 }
 
 export async function writePressures(tx: Tx, uploadId: string, rows: PressurePlanRow[], progress: Progress) {
-  await inChunks(rows, 'writing pressure observations', progress, (chunk) =>
-    tx.insert(pressureObservations).values(
-      chunk.map(({ line: _line, wellName: _name, ...r }) => ({ ...r, uploadId })),
-    ),
+  await bulkInsert(
+    tx,
+    'pressure_observations',
+    [
+      ['well_id', 'uuid'], ['kind', 'pressure_kind'], ['md_m', 'float8'], ['tvd_m', 'float8'], ['tvd_from_survey', 'boolean'],
+      ['value_entered', 'float8'], ['unit_entered', 'text'], ['pressure_pa', 'float8'], ['emw_kg_m_3', 'float8'],
+      ['quality', 'pressure_quality'], ['fluid', 'text'], ['observed_on', 'date'], ['source', 'text'], ['upload_id', 'uuid'],
+    ],
+    rows.map((r) => [r.wellId, r.kind, r.mdM, r.tvdM, r.tvdFromSurvey, r.valueEntered, r.unitEntered, r.pressurePa, r.emwKgM3, r.quality, r.fluid, r.observedOn, r.source, uploadId]),
+    (done, total) => progress('writing pressure observations', done, total),
   );
   return { created: rows.length };
 }
 
 export async function writeTops(tx: Tx, uploadId: string, rows: TopPlanRow[], progress: Progress) {
-  await inChunks(rows, 'writing formation tops', progress, (chunk) =>
-    tx.insert(formationTops).values(chunk.map(({ line: _line, wellName: _name, ...r }) => ({ ...r, uploadId }))),
+  await bulkInsert(
+    tx,
+    'formation_tops',
+    [['well_id', 'uuid'], ['name', 'text'], ['md_m', 'float8'], ['tvd_m', 'float8'], ['tvd_from_survey', 'boolean'], ['lithology', 'text'], ['upload_id', 'uuid']],
+    rows.map((r) => [r.wellId, r.name, r.mdM, r.tvdM, r.tvdFromSurvey, r.lithology, uploadId]),
+    (done, total) => progress('writing formation tops', done, total),
   );
   return { created: rows.length };
 }
