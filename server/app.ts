@@ -13,6 +13,7 @@ import type { Mailer } from './features/mail/mailer';
 import { teamsRouter } from './features/teams/teams.router';
 import { wellsRouter } from './features/wells/wells.router';
 import { importsRouter } from './features/imports/imports.router';
+import { basemapRouter } from './features/tiles/basemap.router';
 import { createLogger } from './lib/logger';
 import { errorHandler, notFoundApi } from './middleware/errors';
 import { requireSession } from './middleware/guards';
@@ -58,7 +59,7 @@ export function createApp({ db, env, mailer, logger, serveClient = true }: AppDe
       crossOriginEmbedderPolicy: false,
     }),
   );
-  app.use(pinoHttp({ logger: logger ?? createLogger(env.LOG_LEVEL), autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(pinoHttp({ logger: logger ?? createLogger(env.LOG_LEVEL), autoLogging: { ignore: (req) => req.url === '/api/health' || (req.url ?? '').startsWith('/tiles/') } }));
   app.use(express.json({ limit: JSON_LIMIT }));
   app.use(cookieParser());
   app.use('/api', sessionMiddleware(db, env));
@@ -67,6 +68,7 @@ export function createApp({ db, env, mailer, logger, serveClient = true }: AppDe
   app.use('/api/auth', authRouter(db, env, mailer));
   app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db), importsRouter(db));
   app.use('/api', notFoundApi);
+  app.use('/tiles', basemapRouter());
 
   const dist = resolve(env.PORELITH_DIST);
   if (serveClient && existsSync(resolve(dist, 'index.html'))) {
