@@ -14,6 +14,9 @@ import { teamsRouter } from './features/teams/teams.router';
 import { wellsRouter } from './features/wells/wells.router';
 import { importsRouter } from './features/imports/imports.router';
 import { basemapRouter } from './features/tiles/basemap.router';
+import { teamTilesRouter } from './features/tiles/teamTiles.router';
+import { planningRouter } from './features/planning/planning.router';
+import { TeamChanges } from './lib/teamChanges';
 import { createLogger } from './lib/logger';
 import { errorHandler, notFoundApi } from './middleware/errors';
 import { requireSession } from './middleware/guards';
@@ -66,7 +69,8 @@ export function createApp({ db, env, mailer, logger, serveClient = true }: AppDe
 
   app.use('/api/health', healthRouter(db));
   app.use('/api/auth', authRouter(db, env, mailer));
-  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db), importsRouter(db));
+  const changes = new TeamChanges();
+  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), teamTilesRouter(db, changes));
   app.use('/api', notFoundApi);
   app.use('/tiles', basemapRouter());
 

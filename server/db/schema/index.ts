@@ -4,3 +4,4 @@ export * from './mail';
 export * from './uploads';
 export * from './wells';
 export * from './wellData';
+export * from './planning';

@@ -5,6 +5,7 @@ import { IMPORT_KINDS } from '../../../shared/schemas/imports';
 import type { Db } from '../../db/client';
 import { HttpError, badRequest, notFound } from '../../lib/httpError';
 import { parse } from '../../lib/parse';
+import type { TeamChanges } from '../../lib/teamChanges';
 import { requireTeam, teamIdOf } from '../../middleware/guards';
 import { ImportJobs } from './importJobs';
 import { MAX_FILE_BYTES, getUploadFile, listUploads, runImport } from './imports.service';
@@ -53,7 +54,7 @@ const receiveFile: RequestHandler = (req, res, next) => {
   });
 };
 
-export function importsRouter(db: Db): Router {
+export function importsRouter(db: Db, changes: TeamChanges): Router {
   const r = Router({ mergeParams: true });
   const jobs = new ImportJobs();
 
@@ -75,11 +76,17 @@ export function importsRouter(db: Db): Router {
       onDuplicate: form.onDuplicate,
     };
     if (form.async) {
-      const job = jobs.start(request.teamId, (progress) => runImport(db, request, progress));
+      const job = jobs.start(request.teamId, async (progress) => {
+        const result = await runImport(db, request, progress);
+        if (!form.dryRun) changes.bump(request.teamId);
+        return result;
+      });
       res.status(202).json({ jobId: job.id });
       return;
     }
-    res.status(form.dryRun ? 200 : 201).json(await runImport(db, request));
+    const result = await runImport(db, request);
+    if (!form.dryRun) changes.bump(request.teamId);
+    res.status(form.dryRun ? 200 : 201).json(result);
   });
 
   r.get('/:teamId/imports/jobs/:jobId', requireTeam('wells.import'), (req, res) => {

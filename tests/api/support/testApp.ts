@@ -107,3 +107,14 @@ export async function freshTeamAgent(ctx: TestContext, label: string, role: 'adm
   const agent = await signedInAgent(ctx, email, password);
   return { teamId: team.id, userId: user.id, email, password, agent };
 }
+
+/** Another member of an existing team, signed in. */
+export async function memberAgent(ctx: TestContext, teamId: string, role: 'admin' | 'geoscientist' | 'planner' | 'viewer') {
+  const { randomUUID } = await import('node:crypto');
+  const bcrypt = (await import('bcryptjs')).default;
+  const { users, memberships } = await import('../../../server/db/schema');
+  const email = `${role}-${randomUUID().slice(0, 8)}@porelith.example`;
+  const [user] = await ctx.db.insert(users).values({ email, name: `Member ${role}`, passwordHash: await bcrypt.hash('member-password', 4) }).returning();
+  await ctx.db.insert(memberships).values({ teamId, userId: user.id, role });
+  return { userId: user.id, agent: await signedInAgent(ctx, email, 'member-password') };
+}
