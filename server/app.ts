@@ -17,6 +17,7 @@ import { basemapRouter } from './features/tiles/basemap.router';
 import { teamTilesRouter } from './features/tiles/teamTiles.router';
 import { planningRouter } from './features/planning/planning.router';
 import { TeamChanges } from './lib/teamChanges';
+import { layersRouter } from './features/layers/layers.router';
 import { createLogger } from './lib/logger';
 import { errorHandler, notFoundApi } from './middleware/errors';
 import { requireSession } from './middleware/guards';
@@ -70,7 +71,7 @@ export function createApp({ db, env, mailer, logger, serveClient = true }: AppDe
   app.use('/api/health', healthRouter(db));
   app.use('/api/auth', authRouter(db, env, mailer));
   const changes = new TeamChanges();
-  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), teamTilesRouter(db, changes));
+  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), layersRouter(db, changes), teamTilesRouter(db, changes));
   app.use('/api', notFoundApi);
   app.use('/tiles', basemapRouter());
 
