@@ -112,4 +112,22 @@ describe('seeding the demo basin', () => {
     const { ids: _b, ...beforeContent } = before;
     expect(freshContent).toEqual(beforeContent);
   });
+
+  it('adds the invented prospects with their planned wells inside them', async () => {
+    const team = await freshTeamAgent(ctx, 'Demo prospects', 'planner');
+    createdTeams.push(team.teamId);
+    await seedDemoBasin(ctx.db, team.teamId);
+    const prospects = (await team.agent.get(`/api/teams/${team.teamId}/prospects`)).body;
+    expect(prospects.map((p: { name: string }) => p.name).sort()).toEqual(demo.prospects.map((p) => p.name).sort());
+    const planned = (await team.agent.get(`/api/teams/${team.teamId}/planned-wells`)).body;
+    expect(planned).toHaveLength(demo.prospects.reduce((n, p) => n + p.plannedWells.length, 0));
+    const inside = await ctx.db.execute<{ n: number }>(sql`
+      SELECT count(*)::int AS n FROM planned_wells pw JOIN prospects p ON p.id = pw.prospect_id
+      WHERE pw.team_id = ${team.teamId} AND ST_Contains(p.outline, pw.location)`);
+    expect(inside.rows[0].n).toBe(planned.length);
+    expect(planned.every((w: { waterDepthSource: string }) => w.waterDepthSource === 'nearest-wells')).toBe(true);
+    // The demo offsets are real: a 15 km search around the first planned well finds demo wells.
+    const cands = (await team.agent.get(`/api/teams/${team.teamId}/planned-wells/${planned[0].id}/offset-candidates?radiusKm=15`)).body;
+    expect(cands.length).toBeGreaterThan(0);
+  });
 });

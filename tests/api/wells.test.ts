@@ -34,6 +34,19 @@ describe('well list', () => {
     expect((await team.agent.get(`${base}/wells?hasPressures=true`)).body.total).toBe(0);
   });
 
+  it('counts each well’s own data (pressures, survey, LOT) in the list and filters on it', async () => {
+    const csv = Buffer.from('well,kind,md (m),value,unit\nTEST-2,formation_test,2000,3000,psi\nTEST-2,lot,1500,16,ppg\n');
+    expect((await team.agent.post(`${base}/imports`).field('kind', 'pressures').attach('file', csv, 'p.csv')).status).toBe(201);
+    const list = await team.agent.get(`${base}/wells?sort=name`);
+    const byName = Object.fromEntries(list.body.items.map((w: { name: string }) => [w.name, w]));
+    expect(byName['TEST-2']).toMatchObject({ pressureCount: 2, hasLot: true, hasSurvey: false, logCount: 0 });
+    expect(byName['TEST-1']).toMatchObject({ pressureCount: 0, hasLot: false });
+    const withData = await team.agent.get(`${base}/wells?hasPressures=true`);
+    expect(withData.body.items.map((w: { name: string }) => w.name)).toEqual(['TEST-2']);
+    const sorted = await team.agent.get(`${base}/wells?sort=pressureCount&order=desc`);
+    expect(sorted.body.items[0].name).toBe('TEST-2');
+  });
+
   it('rejects a malformed bounding box and an unknown sort by name', async () => {
     const bad = await team.agent.get(`${base}/wells?bbox=10,20,5,30&sort=colour`);
     expect(bad.status).toBe(400);

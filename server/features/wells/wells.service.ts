@@ -18,7 +18,10 @@ import { UNIQUE_VIOLATION, pgErrorCode } from '../../lib/pgError';
 
 type ListQuery = z.output<typeof wellListQuery>;
 
-// Counts per well come from correlated sub-queries so the list stays one round trip.
+// Counts per well come from correlated sub-queries so the list stays one round trip. The outer id is
+// spelled in full: drizzle renders a column of the selected table unqualified, and inside the sub-query
+// a bare "id" would be the sub-query's own.
+const outerId = sql.raw('"wells"."id"');
 const summaryColumns = {
   id: wells.id,
   name: wells.name,
@@ -32,10 +35,10 @@ const summaryColumns = {
   tdMdM: wells.tdMdM,
   tdTvdM: wells.tdTvdM,
   spudDate: wells.spudDate,
-  pressureCount: sql<number>`(SELECT count(*)::int FROM ${pressureObservations} p WHERE p.well_id = ${wells.id})`,
-  logCount: sql<number>`(SELECT count(*)::int FROM ${logCurves} l WHERE l.well_id = ${wells.id})`,
-  hasSurvey: sql<boolean>`EXISTS (SELECT 1 FROM ${surveyStations} s WHERE s.well_id = ${wells.id})`,
-  hasLot: sql<boolean>`EXISTS (SELECT 1 FROM ${pressureObservations} p WHERE p.well_id = ${wells.id} AND p.kind IN ('lot','fit'))`,
+  pressureCount: sql<number>`(SELECT count(*)::int FROM ${pressureObservations} p WHERE p.well_id = ${outerId})`,
+  logCount: sql<number>`(SELECT count(*)::int FROM ${logCurves} l WHERE l.well_id = ${outerId})`,
+  hasSurvey: sql<boolean>`EXISTS (SELECT 1 FROM ${surveyStations} s WHERE s.well_id = ${outerId})`,
+  hasLot: sql<boolean>`EXISTS (SELECT 1 FROM ${pressureObservations} p WHERE p.well_id = ${outerId} AND p.kind IN ('lot','fit'))`,
   updatedAt: wells.updatedAt,
 };
 
@@ -53,7 +56,7 @@ export async function listWells(db: Db, teamId: string, q: ListQuery): Promise<W
   if (q.q) where.push(sql`(${wells.name} ILIKE ${'%' + q.q + '%'} OR ${wells.uwi} ILIKE ${'%' + q.q + '%'} OR ${wells.operator} ILIKE ${'%' + q.q + '%'})`);
   if (q.status?.length) where.push(sql`${wells.status} IN (${sql.join(q.status.map((s) => sql`${s}`), sql`, `)})`);
   if (q.hasPressures !== undefined) {
-    where.push(sql`${q.hasPressures ? sql`` : sql`NOT`} EXISTS (SELECT 1 FROM ${pressureObservations} p WHERE p.well_id = ${wells.id})`);
+    where.push(sql`${q.hasPressures ? sql`` : sql`NOT`} EXISTS (SELECT 1 FROM ${pressureObservations} p WHERE p.well_id = ${outerId})`);
   }
   if (q.bbox) {
     const [w, s, e, n] = q.bbox;

@@ -4,6 +4,7 @@ import { formationTops, logCurves, pressureObservations, surveyStations, wells }
 import { ewktPoint } from '../../schema/geometry';
 import { DEFAULT_DEMO_SEED, generateDemoBasin } from './generate';
 import { demoWellSpecs } from './layout';
+import { writeDemoProspects } from './writeProspects';
 import type { DemoWell } from './well';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -115,7 +116,9 @@ export async function seedDemoBasin(db: Db, teamId: string, options: SeedDemoBas
         .limit(1);
       if (present.length > 0) return null;
     }
-    return writeBasin(tx, teamId, generateDemoBasin(seed).wells);
+    const written = await writeBasin(tx, teamId, generateDemoBasin(seed).wells);
+    await writeDemoProspects(tx, teamId);
+    return written;
   });
   const ms = Math.round(performance.now() - started);
   if (!counts) return { written: false, wells: 0, pressures: 0, surveyStations: 0, tops: 0, logCurves: 0, ms };
