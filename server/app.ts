@@ -30,12 +30,14 @@ export interface AppDeps {
   logger?: Logger;
   /** Serve the built client from this folder when it exists (off in API tests). */
   serveClient?: boolean;
+  /** Keep recent team tiles in memory (off in the tile benchmark, which must time PostGIS each time). */
+  tileCache?: boolean;
 }
 
 const JSON_LIMIT = '1mb';
 
 /** Builds the whole HTTP app without listening, so tests drive it with supertest. */
-export function createApp({ db, env, mailer, logger, serveClient = true }: AppDeps): Express {
+export function createApp({ db, env, mailer, logger, serveClient = true, tileCache = true }: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -71,7 +73,7 @@ export function createApp({ db, env, mailer, logger, serveClient = true }: AppDe
   app.use('/api/health', healthRouter(db));
   app.use('/api/auth', authRouter(db, env, mailer));
   const changes = new TeamChanges();
-  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), layersRouter(db, changes), teamTilesRouter(db, changes));
+  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), layersRouter(db, changes), teamTilesRouter(db, changes, { cache: tileCache }));
   app.use('/api', notFoundApi);
   app.use('/tiles', basemapRouter());
 

@@ -25,7 +25,12 @@ export async function offsetCandidates(db: Db, teamId: string, plannedWellId: st
   const planned = await getPlannedWell(db, teamId, plannedWellId);
   const [lon, lat] = planned.location.coordinates;
   const here = sql`ST_SetSRID(ST_MakePoint(${lon}, ${lat}), 4326)`;
-  let area = sql`ST_DWithin(w.location::geography, ${here}::geography, ${opts.radiusKm * 1000})`;
+  // A lon/lat box around the circle lets the GiST index on wells.location pick the rows; the exact test
+  // on the spheroid follows. 110.5 km per degree of latitude is a floor (it is 110.57–111.69 km).
+  const dLat = opts.radiusKm / 110.5;
+  const dLon = Math.min(180, dLat / Math.max(Math.cos(((Math.abs(lat) + dLat) * Math.PI) / 180), 1e-6));
+  const box = sql`w.location && ST_MakeEnvelope(${lon - dLon}, ${lat - dLat}, ${lon + dLon}, ${lat + dLat}, 4326)`;
+  let area = sql`${box} AND ST_DWithin(w.location::geography, ${here}::geography, ${opts.radiusKm * 1000})`;
   let radiusKm = opts.radiusKm;
   if (opts.prospectBufferKm !== undefined) {
     if (!planned.prospectId) throw badRequest('no_prospect', 'This planned well belongs to no prospect; search by radius instead.');

@@ -21,9 +21,9 @@ function layerOf(name: string): TeamLayer | null {
 }
 
 /** Team vector tiles from PostGIS (`ST_AsMVT`), cached briefly and keyed by the team's change counter. */
-export function teamTilesRouter(db: Db, changes: TeamChanges): Router {
+export function teamTilesRouter(db: Db, changes: TeamChanges, { cache: useCache = true } = {}): Router {
   const r = Router({ mergeParams: true });
-  const cache = new TtlCache<Buffer>(4000, 60_000);
+  const cache = new TtlCache<Buffer>(useCache ? 4000 : 0, 60_000);
   r.get('/:teamId/tiles/:layer/:z/:x/:y.mvt', requireTeam('team.read'), async (req, res) => {
     const p = params.safeParse(req.params);
     const layer = p.success ? layerOf(p.data.layer) : null;

@@ -25,16 +25,20 @@ function wellsQuery(teamId: string, z: number, x: number, y: number): SQL {
         FROM wells w WHERE ${inTile})
       SELECT ST_AsMVT(f, 'wells', ${EXTENT}, 'geom') AS tile FROM f WHERE geom IS NOT NULL`;
   }
-  // Cells in web-mercator metres: the tile's width over the grid size.
-  const cell = sql`((ST_XMax(${env}) - ST_XMin(${env})) / ${CLUSTER_CELLS})`;
+  // Grid cells computed from lon/lat with the web-mercator formulas (OpenStreetMap slippy-map tile
+  // numbering scaled by the cells per tile): arithmetic per row instead of ST_Transform, and only the
+  // cluster centres are turned into geometry.
+  const n = 2 ** z * CLUSTER_CELLS;
   return sql`
     WITH p AS (
-      SELECT w.id, w.name, w.status::text AS status, ST_Transform(w.location, 3857) AS g FROM wells w WHERE ${inTile}),
+      SELECT w.id, w.name, w.status::text AS status, ST_X(w.location) AS lon, ST_Y(w.location) AS lat FROM wells w WHERE ${inTile}),
     c AS (
-      SELECT ST_Centroid(ST_Collect(g)) AS g, count(*)::int AS count, min(id::text) AS id, min(name) AS name, min(status) AS status
-      FROM p GROUP BY ST_SnapToGrid(g, ${cell}, ${cell})),
+      SELECT count(*)::int AS count, avg(lon) AS lon, avg(lat) AS lat, min(id::text) AS id, min(name) AS name, min(status) AS status
+      FROM p
+      GROUP BY floor((lon + 180) / 360 * ${n}), floor((1 - ln(tan(radians(lat)) + 1 / cos(radians(lat))) / pi()) / 2 * ${n})),
     f AS (
-      SELECT ST_AsMVTGeom(g, ${env}, ${EXTENT}, ${BUFFER}, true) AS geom, count, count > 1 AS cluster,
+      SELECT ST_AsMVTGeom(ST_Transform(ST_SetSRID(ST_MakePoint(lon, lat), 4326), 3857), ${env}, ${EXTENT}, ${BUFFER}, true) AS geom,
+        count, count > 1 AS cluster,
         CASE WHEN count = 1 THEN id END AS id, CASE WHEN count = 1 THEN name END AS name, CASE WHEN count = 1 THEN status END AS status
       FROM c)
     SELECT ST_AsMVT(f, 'wells', ${EXTENT}, 'geom') AS tile FROM f WHERE geom IS NOT NULL`;
