@@ -18,6 +18,7 @@ import { teamTilesRouter } from './features/tiles/teamTiles.router';
 import { planningRouter } from './features/planning/planning.router';
 import { TeamChanges } from './lib/teamChanges';
 import { layersRouter } from './features/layers/layers.router';
+import { interpretationsRouter } from './features/interpretations/interpretations.router';
 import { createLogger } from './lib/logger';
 import { errorHandler, notFoundApi } from './middleware/errors';
 import { requireSession } from './middleware/guards';
@@ -73,7 +74,7 @@ export function createApp({ db, env, mailer, logger, serveClient = true, tileCac
   app.use('/api/health', healthRouter(db));
   app.use('/api/auth', authRouter(db, env, mailer));
   const changes = new TeamChanges();
-  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), layersRouter(db, changes), teamTilesRouter(db, changes, { cache: tileCache }));
+  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), layersRouter(db, changes), interpretationsRouter(db, changes), teamTilesRouter(db, changes, { cache: tileCache }));
   app.use('/api', notFoundApi);
   app.use('/tiles', basemapRouter());
 

@@ -5,3 +5,4 @@ export * from './uploads';
 export * from './wells';
 export * from './wellData';
 export * from './planning';
+export * from './interpretations';
