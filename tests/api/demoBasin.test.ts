@@ -129,5 +129,10 @@ describe('seeding the demo basin', () => {
     // The demo offsets are real: a 15 km search around the first planned well finds demo wells.
     const cands = (await team.agent.get(`/api/teams/${team.teamId}/planned-wells/${planned[0].id}/offset-candidates?radiusKm=15`)).body;
     expect(cands.length).toBeGreaterThan(0);
+    // Demo wells come with an accepted automatic TOP pick, so surfaces and offsets have something to show.
+    const withTop = await Promise.all(cands.slice(0, 5).map((c: { wellId: string }) => team.agent.get(`/api/teams/${team.teamId}/wells/${c.wellId}/interpretations/current`)));
+    const found = withTop.filter((r) => r.status === 200);
+    expect(found.length).toBeGreaterThan(0);
+    expect(found[0].body).toMatchObject({ version: 1, status: 'accepted', top: { method: 'auto' } });
   });
 });

@@ -5,6 +5,7 @@ import { ewktPoint } from '../../schema/geometry';
 import { DEFAULT_DEMO_SEED, generateDemoBasin } from './generate';
 import { demoWellSpecs } from './layout';
 import { writeDemoProspects } from './writeProspects';
+import { writeDemoInterpretations } from './writeInterpretations';
 import type { DemoWell } from './well';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -84,6 +85,7 @@ async function writeBasin(tx: Tx, teamId: string, demo: DemoWell[]): Promise<Omi
   await inChunks(pressures, ROWS_PER_INSERT, (chunk) => tx.insert(pressureObservations).values(chunk));
   await inChunks(tops, ROWS_PER_INSERT, (chunk) => tx.insert(formationTops).values(chunk));
   await inChunks(curves, CURVES_PER_INSERT, (chunk) => tx.insert(logCurves).values(chunk));
+  await writeDemoInterpretations(tx, demo, idOf);
   return { wells: ids.length, pressures: pressures.length, surveyStations: stations.length, tops: tops.length, logCurves: curves.length };
 }
 
