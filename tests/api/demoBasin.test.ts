@@ -134,5 +134,7 @@ describe('seeding the demo basin', () => {
     const found = withTop.filter((r) => r.status === 200);
     expect(found.length).toBeGreaterThan(0);
     expect(found[0].body).toMatchObject({ version: 1, status: 'accepted', top: { method: 'auto' } });
+    const withPick = cands.find((c: { topTvdssM: number | null }) => c.topTvdssM !== null);
+    expect(withPick.topTvdssM).toBeGreaterThan(1500);
   });
 });

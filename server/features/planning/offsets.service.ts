@@ -41,7 +41,7 @@ export async function offsetCandidates(db: Db, teamId: string, plannedWellId: st
   }
   const rows = await db.execute<{
     id: string; name: string; uwi: string | null; status: string; lon: number; lat: number; distance_m: number; azimuth_rad: number | null;
-    water_depth_m: number | null; td_tvd_m: number | null; td_md_m: number | null; pressures: number; logs: number; has_lot: boolean; has_survey: boolean; in_set: boolean;
+    water_depth_m: number | null; td_tvd_m: number | null; td_md_m: number | null; pressures: number; logs: number; has_lot: boolean; has_survey: boolean; in_set: boolean; top_tvdss_m: number | null;
   }>(sql`
     SELECT w.id, w.name, w.uwi, w.status::text, ST_X(w.location) AS lon, ST_Y(w.location) AS lat,
       ST_Distance(w.location::geography, ${here}::geography) AS distance_m,
@@ -51,7 +51,9 @@ export async function offsetCandidates(db: Db, teamId: string, plannedWellId: st
       (SELECT count(*)::int FROM log_curves l WHERE l.well_id = w.id) AS logs,
       EXISTS (SELECT 1 FROM pressure_observations p WHERE p.well_id = w.id AND p.kind IN ('lot', 'fit')) AS has_lot,
       EXISTS (SELECT 1 FROM survey_stations s WHERE s.well_id = w.id) AS has_survey,
-      EXISTS (SELECT 1 FROM offset_picks o WHERE o.planned_well_id = ${plannedWellId} AND o.well_id = w.id) AS in_set
+      EXISTS (SELECT 1 FROM offset_picks o WHERE o.planned_well_id = ${plannedWellId} AND o.well_id = w.id) AS in_set,
+      (SELECT (i.content->'top'->>'tvdM')::float8 - w.datum_elevation_m FROM interpretations i
+        WHERE i.well_id = w.id AND i.status = 'accepted' ORDER BY i.version DESC LIMIT 1) AS top_tvdss_m
     FROM wells w
     WHERE w.team_id = ${teamId} AND ${area}
     ORDER BY distance_m
@@ -80,7 +82,7 @@ export async function offsetCandidates(db: Db, teamId: string, plannedWellId: st
         logCount: r.logs,
         hasLot: r.has_lot,
         hasSurvey: r.has_survey,
-        topTvdssM: null,
+        topTvdssM: r.top_tvdss_m === null ? null : Number(r.top_tvdss_m),
         inOffsetSet: r.in_set,
         score: 0,
       };
