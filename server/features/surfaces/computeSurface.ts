@@ -1,0 +1,210 @@
+import * as turf from '@turf/turf';
+import { contours as d3Contours } from 'd3-contour';
+import proj4 from 'proj4';
+import type { Polygon } from 'geojson';
+import {
+  experimentalVariogram,
+  fitVariogram,
+  grid as makeGrid,
+  idw,
+  leaveOneOut,
+  ordinaryKriging,
+  type DataPoint,
+  type Variogram,
+} from '../../../shared/interpolation';
+import { MAX_SURFACE_CELLS, surfaceRequestBody, type Surface } from '../../../shared/schemas/surfaces';
+import type { z } from 'zod';
+
+export type SurfaceParams = z.output<typeof surfaceRequestBody>;
+
+export interface SurfaceInputPoint {
+  wellId: string;
+  name: string;
+  lon: number;
+  lat: number;
+  value: number;
+  interpretationVersion: number | null;
+}
+
+export interface SurfaceInput {
+  points: SurfaceInputPoint[];
+  /** The prospect outline, lon/lat. */
+  outline: Polygon;
+  params: SurfaceParams;
+}
+
+export type SurfaceResult = Pick<Surface, 'grid' | 'contours' | 'extent' | 'variogram' | 'crossValidation' | 'wells' | 'warnings'>;
+
+/** A failure the caller should show as it is (bad input, not a bug). */
+export class SurfaceInputError extends Error {}
+
+type Progress = (phase: string, done: number, total: number) => void;
+
+/** Two wells closer than this are one location for the interpolation. */
+const SAME_LOCATION_M = 1;
+const EXPERIMENTAL_LAGS = 12;
+
+/**
+ * A local azimuthal equidistant frame about the prospect centre: distances from the centre are true and,
+ * over a prospect's tens of kilometres, every distance is within a small fraction of a percent.
+ */
+function localFrame(outline: Polygon) {
+  const [lon, lat] = turf.centroid(outline).geometry.coordinates;
+  const def = `+proj=aeqd +lat_0=${lat} +lon_0=${lon} +x_0=0 +y_0=0 +datum=WGS84 +units=m +no_defs`;
+  const converter = proj4('EPSG:4326', def);
+  return {
+    def,
+    forward: (p: number[]) => converter.forward([p[0], p[1]]) as [number, number],
+    inverse: (p: number[]) => converter.inverse([p[0], p[1]]) as [number, number],
+  };
+}
+
+/**
+ * Interpolates well values (e.g. TOP depths) onto a grid over the prospect plus a buffer: ordinary
+ * kriging with a fitted or given variogram, or inverse-distance weighting; leave-one-out
+ * cross-validation; contour bands from d3-contour, all returned in lon/lat.
+ */
+export function computeSurface({ points: raw, outline, params }: SurfaceInput, progress: Progress = () => {}): SurfaceResult {
+  const warnings: string[] = [];
+  const frame = localFrame(outline);
+  // Duplicate locations make the kriging system singular: merge them and say so.
+  const merged: (SurfaceInputPoint & { x: number; y: number; members: string[] })[] = [];
+  for (const p of raw) {
+    const [x, y] = frame.forward([p.lon, p.lat]);
+    const twin = merged.find((m) => Math.hypot(m.x - x, m.y - y) < SAME_LOCATION_M);
+    if (twin) {
+      twin.value = (twin.value * twin.members.length + p.value) / (twin.members.length + 1);
+      twin.members.push(p.name);
+      continue;
+    }
+    merged.push({ ...p, x, y, members: [p.name] });
+  }
+  for (const m of merged) if (m.members.length > 1) warnings.push(`Wells ${m.members.join(', ')} share a location; their values were averaged.`);
+  if (merged.length < 3) {
+    throw new SurfaceInputError(`A surface needs at least 3 wells with a value at different locations; found ${merged.length}.`);
+  }
+  const data: DataPoint[] = merged.map((m) => ({ x: m.x, y: m.y, value: m.value }));
+
+  const extentLonLat = turf.buffer(turf.feature(outline), params.extentBufferKm, { units: 'kilometers' })!.geometry as Polygon;
+  const ringM = extentLonLat.coordinates[0].map(frame.forward);
+  const extentM = turf.polygon([ringM]);
+  const [minX, minY, maxX, maxY] = turf.bbox(extentM);
+  let g: ReturnType<typeof makeGrid>;
+  try {
+    g = makeGrid([minX, minY, maxX, maxY], params.cellSizeM, { maxCells: MAX_SURFACE_CELLS });
+  } catch (err) {
+    throw new SurfaceInputError(`${(err as Error).message}: choose a larger cell size.`);
+  }
+  const inside = g.targets.map((t) => turf.booleanPointInPolygon([t.x, t.y], extentM));
+  const targets = g.targets.filter((_, k) => inside[k]);
+
+  const values = data.map((d) => d.value);
+  const flat = Math.max(...values) - Math.min(...values) === 0;
+  let variogram: Variogram | null = null;
+  let experimental: ReturnType<typeof experimentalVariogram> = [];
+  let fitted = false;
+  let estimates: { value: number; variance: number | null }[];
+  progress('interpolating', 0, targets.length);
+  if (flat) {
+    warnings.push(`All ${data.length} wells have the same value (${values[0]}): the surface is flat and its kriging variance is zero.`);
+    estimates = targets.map(() => ({ value: values[0], variance: params.method.kind === 'kriging' ? 0 : null }));
+  } else if (params.method.kind === 'kriging') {
+    let maxD = 0;
+    for (let i = 0; i < data.length; i++) for (let j = i + 1; j < data.length; j++) maxD = Math.max(maxD, Math.hypot(data[i].x - data[j].x, data[i].y - data[j].y));
+    experimental = experimentalVariogram(data, { lags: EXPERIMENTAL_LAGS, lagWidth: maxD / 2 / EXPERIMENTAL_LAGS });
+    if (params.method.variogram) variogram = params.method.variogram;
+    else {
+      if (experimental.length < 3) throw new SurfaceInputError('Too few well pairs to fit a variogram: give one by hand, or use inverse-distance weighting.');
+      variogram = fitVariogram(experimental, { model: params.method.model });
+      fitted = true;
+    }
+    const k = ordinaryKriging(data, variogram, targets, { maxNeighbours: Math.min(params.method.maxNeighbours, data.length) });
+    estimates = k.map((e) => ({ value: e.value, variance: e.variance }));
+  } else {
+    estimates = idw(data, targets, { power: params.method.power }).map((value) => ({ value, variance: null }));
+  }
+  progress('cross-validating', targets.length, targets.length);
+
+  const method =
+    params.method.kind === 'kriging' && variogram
+      ? { kind: 'kriging' as const, variogram, maxNeighbours: Math.min(params.method.maxNeighbours, data.length - 1) }
+      : { kind: 'idw' as const, power: params.method.kind === 'idw' ? params.method.power : 2 };
+  const loo = flat ? { rmse: 0, meanError: 0, residuals: data.map((d, index) => ({ index, observed: d.value, predicted: d.value, residual: 0 })) } : leaveOneOut(data, method);
+
+  const cellValues: (number | null)[] = new Array(g.nx * g.ny).fill(null);
+  const cellStd: (number | null)[] | null = params.method.kind === 'kriging' ? new Array(g.nx * g.ny).fill(null) : null;
+  let t = 0;
+  let min = Infinity;
+  let max = -Infinity;
+  for (let c = 0; c < inside.length; c++) {
+    if (!inside[c]) continue;
+    const e = estimates[t++];
+    cellValues[c] = e.value;
+    if (cellStd) cellStd[c] = e.variance === null ? null : Math.sqrt(Math.max(0, e.variance));
+    min = Math.min(min, e.value);
+    max = Math.max(max, e.value);
+  }
+
+  // Contour bands: each feature is the region at or beyond its value (d3-contour), as a MultiPolygon.
+  progress('contouring', 0, 1);
+  const interval = params.contourIntervalM;
+  const thresholds: number[] = [];
+  for (let v = Math.ceil(min / interval) * interval; v <= max; v += interval) thresholds.push(v);
+  const grid2 = cellValues.map((v) => (v === null ? NaN : v));
+  const toLonLat = ([cx, cy]: number[]) => {
+    const [lon, lat] = frame.inverse([g.x0 - g.cellSize / 2 + cx * g.cellSize, g.y0 - g.cellSize / 2 + cy * g.cellSize]);
+    return [Math.round(lon * 1e7) / 1e7, Math.round(lat * 1e7) / 1e7];
+  };
+  const bands = flat ? [] : d3Contours().size([g.nx, g.ny]).thresholds(thresholds)(grid2);
+  const contours = {
+    type: 'FeatureCollection' as const,
+    features: bands
+      .filter((b) => b.coordinates.length > 0)
+      .map((b) => ({
+        type: 'Feature',
+        properties: { value: b.value, label: `${Math.round(b.value)} m` },
+        geometry: { type: 'MultiPolygon', coordinates: b.coordinates.map((poly) => poly.map((ring) => ring.map(toLonLat))) },
+      })),
+  };
+
+  const corner = (x: number, y: number) => frame.inverse([x, y]);
+  const x1 = g.x0 - g.cellSize / 2;
+  const y1 = g.y0 - g.cellSize / 2;
+  const x2 = x1 + g.nx * g.cellSize;
+  const y2 = y1 + g.ny * g.cellSize;
+  const byIndex = new Map(loo.residuals.map((r) => [r.index, r]));
+  return {
+    grid: {
+      nx: g.nx,
+      ny: g.ny,
+      cellSizeM: g.cellSize,
+      projection: frame.def,
+      x0: g.x0,
+      y0: g.y0,
+      values: cellValues,
+      stdDev: cellStd,
+      cornersLonLat: [corner(x1, y1), corner(x2, y1), corner(x2, y2), corner(x1, y2)],
+      min,
+      max,
+    },
+    contours,
+    extent: extentLonLat as Surface['extent'],
+    variogram: variogram ? { model: variogram, experimental, fitted } : null,
+    crossValidation: { rmse: loo.rmse, meanError: loo.meanError },
+    wells: merged.flatMap((m, index) =>
+      raw
+        .filter((p) => m.members.includes(p.name))
+        .map((p) => ({
+          wellId: p.wellId,
+          name: p.name,
+          lon: p.lon,
+          lat: p.lat,
+          value: p.value,
+          interpretationVersion: p.interpretationVersion,
+          residual: byIndex.get(index)?.residual ?? null,
+          predicted: byIndex.get(index)?.predicted ?? null,
+        })),
+    ),
+    warnings,
+  };
+}
