@@ -19,6 +19,7 @@ import { planningRouter } from './features/planning/planning.router';
 import { TeamChanges } from './lib/teamChanges';
 import { layersRouter } from './features/layers/layers.router';
 import { interpretationsRouter } from './features/interpretations/interpretations.router';
+import { surfacesRouter } from './features/surfaces/surfaces.router';
 import { createLogger } from './lib/logger';
 import { errorHandler, notFoundApi } from './middleware/errors';
 import { requireSession } from './middleware/guards';
@@ -74,7 +75,7 @@ export function createApp({ db, env, mailer, logger, serveClient = true, tileCac
   app.use('/api/health', healthRouter(db));
   app.use('/api/auth', authRouter(db, env, mailer));
   const changes = new TeamChanges();
-  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), layersRouter(db, changes), interpretationsRouter(db, changes), teamTilesRouter(db, changes, { cache: tileCache }));
+  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), layersRouter(db, changes), interpretationsRouter(db, changes), surfacesRouter(db), teamTilesRouter(db, changes, { cache: tileCache }));
   app.use('/api', notFoundApi);
   app.use('/tiles', basemapRouter());
 

@@ -6,3 +6,4 @@ export * from './wells';
 export * from './wellData';
 export * from './planning';
 export * from './interpretations';
+export * from './surfaces';

@@ -6,7 +6,7 @@ import { formationTops, logCurves, pressureObservations, surveyStations } from '
 import { bulkInsert, bulkUpdate, type BulkColumn } from '../../lib/bulkInsert';
 import { ewktPoint } from '../../db/schema/geometry';
 import type { PressurePlanRow, SurveyPlan, TopPlanRow, WellPlanRow } from './csvPlans';
-import type { Progress } from './importJobs';
+import type { Progress } from '../../lib/jobs';
 import type { LasPlan } from './lasPlan';
 import { tvdFromSurvey } from './wellLookup';
 

@@ -7,7 +7,7 @@ import { HttpError, badRequest, notFound } from '../../lib/httpError';
 import { parse } from '../../lib/parse';
 import type { TeamChanges } from '../../lib/teamChanges';
 import { requireTeam, teamIdOf } from '../../middleware/guards';
-import { ImportJobs } from './importJobs';
+import { JobRegistry } from '../../lib/jobs';
 import { MAX_FILE_BYTES, getUploadFile, listUploads, runImport } from './imports.service';
 
 const jsonField = (what: string) =>
@@ -56,7 +56,7 @@ const receiveFile: RequestHandler = (req, res, next) => {
 
 export function importsRouter(db: Db, changes: TeamChanges): Router {
   const r = Router({ mergeParams: true });
-  const jobs = new ImportJobs();
+  const jobs = new JobRegistry();
 
   r.post('/:teamId/imports', requireTeam('wells.import'), receiveFile, async (req, res) => {
     const form = parse(importForm, req.body ?? {});

@@ -11,7 +11,7 @@ import type { Db } from '../../db/client';
 import { uploads, wells } from '../../db/schema';
 import { HttpError, badRequest, conflict, notFound } from '../../lib/httpError';
 import { planPressures, planSurveys, planTops, planWells } from './csvPlans';
-import type { Progress } from './importJobs';
+import type { Progress } from '../../lib/jobs';
 import { writeLasCurves, writePressures, writeSurveys, writeTops, writeWells } from './importWriter';
 import { planLas, type LasPlan } from './lasPlan';
 import { WellLookup, loadSurveys } from './wellLookup';

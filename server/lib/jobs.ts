@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 
 export type JobState = 'running' | 'done' | 'error';
 
-export interface ImportJob {
+export interface Job {
   id: string;
   teamId: string;
   state: JobState;
@@ -18,13 +18,13 @@ export type Progress = (phase: string, done: number, total: number) => void;
 
 const KEEP_MS = 30 * 60_000;
 
-/** In-memory progress of long imports, polled by the client; finished jobs are forgotten after 30 minutes. */
-export class ImportJobs {
-  private readonly jobs = new Map<string, ImportJob>();
+/** In-memory progress of long work (imports, surface runs), polled by the client; finished jobs are forgotten after 30 minutes. */
+export class JobRegistry {
+  private readonly jobs = new Map<string, Job>();
 
-  start(teamId: string, run: (progress: Progress) => Promise<unknown>): ImportJob {
+  start(teamId: string, run: (progress: Progress) => Promise<unknown>): Job {
     this.sweep();
-    const job: ImportJob = { id: randomUUID(), teamId, state: 'running', phase: 'starting', done: 0, total: 0, startedAt: Date.now() };
+    const job: Job = { id: randomUUID(), teamId, state: 'running', phase: 'starting', done: 0, total: 0, startedAt: Date.now() };
     this.jobs.set(job.id, job);
     const progress: Progress = (phase, done, total) => Object.assign(job, { phase, done, total });
     run(progress).then(
@@ -33,13 +33,13 @@ export class ImportJobs {
         Object.assign(job, {
           state: 'error',
           phase: 'failed',
-          error: { status: err.status ?? 500, code: err.code ?? 'internal', message: err.message ?? 'The import failed.', details: err.details },
+          error: { status: err.status ?? 500, code: err.code ?? 'internal', message: err.message ?? 'The work failed.', details: err.details },
         }),
     );
     return job;
   }
 
-  get(teamId: string, id: string): ImportJob | undefined {
+  get(teamId: string, id: string): Job | undefined {
     const job = this.jobs.get(id);
     return job && job.teamId === teamId ? job : undefined;
   }

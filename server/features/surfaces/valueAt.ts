@@ -1,0 +1,27 @@
+import proj4 from 'proj4';
+import type { Surface } from '../../../shared/schemas/surfaces';
+
+/**
+ * The surface at a lon/lat by bilinear interpolation between the four surrounding cell centres
+ * (value and standard deviation); null outside the grid or where a neighbour cell lies outside the extent.
+ * @example valueAt(surface.grid, -101.0, -32.5) // { value: 2412.3, stdDev: 38.1 }
+ */
+export function valueAt(grid: Surface['grid'], lon: number, lat: number): { value: number; stdDev: number | null } | null {
+  const [x, y] = proj4('EPSG:4326', grid.projection).forward([lon, lat]);
+  const fi = (x - grid.x0) / grid.cellSizeM;
+  const fj = (y - grid.y0) / grid.cellSizeM;
+  if (fi < 0 || fj < 0 || fi > grid.nx - 1 || fj > grid.ny - 1) return null;
+  const i = Math.min(Math.floor(fi), grid.nx - 2);
+  const j = Math.min(Math.floor(fj), grid.ny - 2);
+  const tx = fi - i;
+  const ty = fj - j;
+  const blend = (a: (number | null)[]) => {
+    const c = [a[j * grid.nx + i], a[j * grid.nx + i + 1], a[(j + 1) * grid.nx + i], a[(j + 1) * grid.nx + i + 1]];
+    if (c.some((v) => v === null)) return null;
+    const [v00, v10, v01, v11] = c as number[];
+    return (1 - ty) * ((1 - tx) * v00 + tx * v10) + ty * ((1 - tx) * v01 + tx * v11);
+  };
+  const value = blend(grid.values);
+  if (value === null) return null;
+  return { value, stdDev: grid.stdDev ? blend(grid.stdDev) : null };
+}
