@@ -1,6 +1,6 @@
 import type { Action } from '@shared/auth/permissions';
 
-export type AreaKey = 'map' | 'wells' | 'prospects' | 'hazards' | 'exports' | 'team' | 'outbox';
+export type AreaKey = 'map' | 'wells' | 'import' | 'prospects' | 'hazards' | 'exports' | 'team' | 'outbox';
 
 /** A work area of the app: one side-navigation entry, one route, one permission. */
 export interface Area {
@@ -29,6 +29,14 @@ export const AREAS: readonly Area[] = [
     label: 'Offset wells',
     summary: 'Drilled wells, their logs and the pore-pressure interpretations made from them.',
     action: 'team.read',
+    section: 'work',
+  },
+  {
+    key: 'import',
+    path: '/import',
+    label: 'Import',
+    summary: 'Bring well headers, surveys, pressures, formation tops and LAS logs into this team, checked line by line first.',
+    action: 'wells.import',
     section: 'work',
   },
   {

@@ -8,6 +8,7 @@ type LazyView = () => Promise<{ default: RouteComponent }>;
 const AREA_VIEWS: Record<AreaKey, LazyView> = {
   map: () => import('@/views/MapView.vue'),
   wells: () => import('@/views/WellsView.vue'),
+  import: () => import('@/views/ImportView.vue'),
   prospects: () => import('@/views/ProspectsView.vue'),
   hazards: () => import('@/views/HazardsView.vue'),
   exports: () => import('@/views/ExportsView.vue'),
@@ -53,6 +54,40 @@ export const routes: RouteRecordRaw[] = [
     children: [
       { path: '', redirect: HOME_PATH },
       ...areaRoutes,
+      {
+        path: 'wells/:wellId',
+        name: 'well-detail',
+        component: () => import('@/views/WellDetailView.vue'),
+        props: true,
+        meta: { action: 'team.read', title: 'Well' },
+      },
+      {
+        path: 'wells/:wellId/profile',
+        name: 'well-profile',
+        component: () => import('@/views/ProfileView.vue'),
+        props: true,
+        meta: { action: 'team.read', title: 'Pressure profile' },
+      },
+      {
+        path: 'compare',
+        name: 'compare',
+        component: () => import('@/views/CompareView.vue'),
+        meta: { action: 'team.read', title: 'Compare wells' },
+      },
+      {
+        path: 'prospects/:prospectId/surfaces',
+        name: 'prospect-surfaces',
+        component: () => import('@/views/SurfaceView.vue'),
+        props: true,
+        meta: { action: 'team.read', title: 'Top-of-overpressure surface' },
+      },
+      {
+        path: 'prospects/:prospectId/surfaces/:surfaceId',
+        name: 'prospect-surface',
+        component: () => import('@/views/SurfaceView.vue'),
+        props: true,
+        meta: { action: 'team.read', title: 'Top-of-overpressure surface' },
+      },
       {
         path: NOT_PERMITTED_PATH.slice(1),
         name: 'not-permitted',

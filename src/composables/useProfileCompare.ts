@@ -1,0 +1,131 @@
+import { ref, shallowRef, watch, type Ref } from 'vue';
+import type { Interpretation } from '@shared/schemas/interpretations';
+import type { PressureObservation, WellDetail } from '@shared/schemas/wells';
+import { G } from '@shared/units';
+import {
+  alignLogs,
+  buildProfile,
+  curveWindow,
+  isGoodPoreMeasurement,
+  measuredWindow,
+  type DrillingWindow,
+  type LogCurveInput,
+  type Profile,
+  type ProfileLogRole,
+} from '@shared/profile';
+import * as wellsApi from '@/api/wells';
+import * as profileApi from '@/api/profile';
+import type { LoadState } from '@/stores/session';
+import { pickCurves, profileWell } from './useProfileData';
+
+/** One well of the comparison with what the table and the plot need. */
+export interface CompareWell {
+  well: WellDetail;
+  pressures: PressureObservation[];
+  interpretation: Interpretation | null;
+  profile: Profile | null;
+  /** Top of overpressure of the accepted interpretation, TVD below the rig datum, m. */
+  topTvdM: number | null;
+  /** Heaviest pore pressure as EMW, kg/m³, and where it came from. */
+  maxEmwKgM3: number;
+  maxEmwBasis: 'interpreted' | 'measured' | 'none';
+  window: DrillingWindow;
+  windowBasis: 'interpreted' | 'LOT and mud weights' | 'none';
+  error: string | null;
+}
+
+/**
+ * Parses `?wells=id1,id2,…`: trimmed, de-duplicated, at most `max` ids (order kept).
+ * @example parseWellIds(' a, b,a ,,c'); // ['a', 'b', 'c']
+ */
+export function parseWellIds(query: unknown, max = 8): string[] {
+  const raw = Array.isArray(query) ? query.join(',') : typeof query === 'string' ? query : '';
+  return [...new Set(raw.split(',').map((s) => s.trim()).filter(Boolean))].slice(0, max);
+}
+
+/**
+ * The numbers the comparison table shows for one well, from its profile (when interpreted) or its measurements.
+ * @example summarise(profile, pressures).windowBasis; // 'interpreted'
+ */
+export function summarise(profile: Profile | null, pressures: readonly PressureObservation[]) {
+  const measuredMax = pressures.filter(isGoodPoreMeasurement).reduce((m, o) => Math.max(m, o.valueSi / (G * o.tvdM)), -Infinity);
+  const interpretedWindow = profile?.porePa && profile.fracturePa ? profile.window : null;
+  const maxEmwKgM3 = interpretedWindow && Number.isFinite(interpretedWindow.maxPoreKgM3) ? interpretedWindow.maxPoreKgM3 : measuredMax;
+  const maxEmwBasis: CompareWell['maxEmwBasis'] =
+    interpretedWindow && Number.isFinite(interpretedWindow.maxPoreKgM3) ? 'interpreted' : Number.isFinite(measuredMax) ? 'measured' : 'none';
+  const measured = measuredWindow(pressures);
+  const window = interpretedWindow && Number.isFinite(interpretedWindow.widthKgM3) ? interpretedWindow : measured;
+  const windowBasis: CompareWell['windowBasis'] =
+    window === interpretedWindow ? 'interpreted' : Number.isFinite(measured.widthKgM3) ? 'LOT and mud weights' : 'none';
+  return { maxEmwKgM3: Number.isFinite(maxEmwKgM3) ? maxEmwKgM3 : NaN, maxEmwBasis, window, windowBasis };
+}
+
+async function loadOne(teamId: string, wellId: string): Promise<CompareWell> {
+  const [well, pressures, interpretation] = await Promise.all([
+    wellsApi.getWell(teamId, wellId),
+    wellsApi.listPressures(teamId, wellId),
+    profileApi.currentInterpretation(teamId, wellId),
+  ]);
+  let profile: Profile | null = null;
+  let error: string | null = null;
+  if (interpretation) {
+    try {
+      const [stations, list] = await Promise.all([wellsApi.listSurveyStations(teamId, wellId), wellsApi.listLogCurves(teamId, wellId)]);
+      const curves = pickCurves(list);
+      const inputs: LogCurveInput[] = await Promise.all(
+        (Object.entries(curves) as [ProfileLogRole, { id: string }][]).map(async ([role, c]) => {
+          const data = await wellsApi.getLogCurve(teamId, wellId, c.id);
+          return { role, unit: data.unit, mdM: data.mdM, values: data.values };
+        }),
+      );
+      const aligned = alignLogs(inputs, stations);
+      profile = buildProfile({
+        well: profileWell(well),
+        tvdM: aligned.tvdM,
+        mdM: aligned.mdM,
+        logs: aligned.logs,
+        interpretation,
+        observations: pressures,
+        baseTvdM: well.tdTvdM ?? undefined,
+        top: interpretation.top ? { marginKgM3: interpretation.top.marginKgM3, minThicknessM: interpretation.top.minThicknessM } : undefined,
+      });
+    } catch (e) {
+      error = e instanceof Error ? e.message : String(e);
+    }
+  }
+  return { well, pressures, interpretation, profile, topTvdM: interpretation?.top?.tvdM ?? null, error, ...summarise(profile, pressures) };
+}
+
+/** For tests: the window of a profile, or of nothing. */
+export const emptyWindow = (): DrillingWindow => curveWindow([], [], []);
+
+/**
+ * Loads the wells of a comparison (each with its accepted interpretation rebuilt into a profile), reloading
+ * when the list changes. A well that fails is reported in `failed` rather than failing the page.
+ * @example const cmp = useProfileCompare(teamId, ids); cmp.wells.value.map((w) => w.topTvdM);
+ */
+export function useProfileCompare(teamId: Ref<string | null>, ids: Ref<string[]>) {
+  const state = ref<LoadState>('idle');
+  const wells = shallowRef<CompareWell[]>([]);
+  const failed = ref<{ id: string; message: string }[]>([]);
+  let latest = 0;
+  async function reload(): Promise<void> {
+    const call = ++latest;
+    if (!teamId.value || ids.value.length === 0) {
+      wells.value = [];
+      state.value = 'done';
+      return;
+    }
+    state.value = 'loading';
+    const team = teamId.value;
+    const results = await Promise.allSettled(ids.value.map((id) => loadOne(team, id)));
+    if (call !== latest) return;
+    wells.value = results.flatMap((r) => (r.status === 'fulfilled' ? [r.value] : []));
+    failed.value = results.flatMap((r, i) =>
+      r.status === 'rejected' ? [{ id: ids.value[i], message: r.reason instanceof Error ? r.reason.message : String(r.reason) }] : [],
+    );
+    state.value = 'done';
+  }
+  watch([teamId, ids], () => void reload(), { immediate: true });
+  return { state, wells, failed, reload };
+}
