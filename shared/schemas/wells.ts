@@ -137,7 +137,7 @@ export const pressureObservationSchema = z.object({
   tvdM: z.number(),
   valueEntered: z.number(),
   unitEntered: z.string(),
-  /** Absolute pressure in Pa, or for mud weights the density in kg/m³ (see `kind`). */
+  /** Absolute pressure in Pa at the TVD (for mud weights: the mud column's hydrostatic pressure); the entered value is in valueEntered. */
   valueSi: z.number(),
   emwKgM3: z.number(),
   quality: z.enum(PRESSURE_QUALITIES),
