@@ -8,6 +8,7 @@ import {
   formatKm,
   formatM,
   formatPercent,
+  formatRangeM,
   formatSignedM,
 } from './format';
 
@@ -66,6 +67,9 @@ describe('table values', () => {
     expect(formatPercent(1.25)).toBe('125 %');
     expect(formatAreaKm2(12.3456)).toBe('12.3 km²');
     expect(formatAreaKm2(0.5)).toBe('0.50 km²');
+    expect(formatRangeM(2300, 3100.4)).toBe('2,300 – 3,100 m');
+    expect(formatRangeM(null, 3100)).toBe('— – 3,100 m');
+    expect(formatRangeM(null, null)).toBe('—');
   });
 
   it('refuses impossible values', () => {

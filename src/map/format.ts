@@ -105,3 +105,14 @@ export function formatAreaKm2(km2: number): string {
   if (!Number.isFinite(km2) || km2 < 0) throw new Error(`formatAreaKm2: area must be a finite number ≥ 0, got ${km2}.`);
   return km2 < 10 ? `${km2.toFixed(2)} km²` : `${km2.toFixed(1)} km²`;
 }
+
+/**
+ * A depth interval in metres; one unknown end reads as a dash, both unknown as a single dash.
+ * @example formatRangeM(2300, 3100) // '2,300 – 3,100 m'
+ * @example formatRangeM(null, null) // '—'
+ */
+export function formatRangeM(topM: number | null, baseM: number | null): string {
+  if (topM === null && baseM === null) return '—';
+  const num = (m: number | null) => (m === null ? '—' : Math.round(m).toLocaleString('en-US'));
+  return `${num(topM)} – ${num(baseM)} m`;
+}

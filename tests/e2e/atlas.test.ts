@@ -165,6 +165,7 @@ describe('the Atlas through the page', () => {
     await page.getByTestId('nav-prospects').click();
     const link = page.getByTestId('prospect-link').filter({ hasText: name });
     await link.waitFor({ timeout: 10_000 });
+    await page.screenshot({ path: join(ARTIFACTS, 'atlas-prospects-list.png') });
     await link.click();
     await page.waitForURL(/\/map\?prospect=/);
     await page.getByTestId('prospect-card').waitFor({ timeout: 15_000 });
