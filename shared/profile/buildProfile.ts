@@ -7,6 +7,7 @@ import type { NumericArray } from '../units/convert';
 import { isGoodPoreMeasurement, misfit, type Misfit, type ProfileObservation } from './calibration';
 import { wellDatums, type ProfileWell } from './datums';
 import { bridgeGaps } from './interpolate';
+import { runningMedian } from './smooth';
 import type { ProfileLogs } from './logGrid';
 import { fracturePressure, porePressure, type FractureSettings, type PoreSettings } from './methods';
 import { trendR2, trendValues, type TrendSettings } from './trend';
@@ -231,7 +232,8 @@ export function buildProfile(input: BuildProfileInput): Profile {
         if (cutoff !== null && logs.gammaApi && !(logs.gammaApi[i] >= cutoff)) return NaN;
         return v;
       });
-      porePa = porePressure(pore, { overburdenPa, normalPa: hydrostaticPa, log: used, trend: isEaton ? normalTrend : null });
+      const smoothed = pore.smoothingM ? runningMedian(tvdM, used, pore.smoothingM) : used;
+      porePa = porePressure(pore, { overburdenPa, normalPa: hydrostaticPa, log: smoothed, trend: isEaton ? normalTrend : null });
     }
   }
 

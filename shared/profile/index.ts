@@ -4,6 +4,7 @@
  */
 export * from './datums';
 export * from './interpolate';
+export * from './smooth';
 export * from './logGrid';
 export * from './trend';
 export * from './methods';

@@ -4,7 +4,7 @@ import { fractureEaton, fractureMatthewsKelly } from '../pressure/fracture';
 import { FT_M } from '../units/constants';
 
 /** Pore-pressure method and parameters as the interpretation stores them. */
-export type PoreSettings =
+export type PoreSettings = (
   | { method: 'eaton-sonic'; exponent: number }
   | { method: 'eaton-resistivity'; exponent: number }
   | {
@@ -14,12 +14,22 @@ export type PoreSettings =
       A: number;
       B: number;
       unloading: { vMaxMs: number; U: number } | null;
-    };
+    }
+) & {
+  /** Running-median window over the log before the method, m; 0 or absent: every reading as logged. */
+  smoothingM?: number;
+};
 
 /** Fracture-pressure method as the interpretation stores it. */
 export type FractureSettings =
   | { method: 'eaton'; poissonTop: number; poissonGradientPerKm: number }
   | { method: 'matthews-kelly'; ki: number };
+
+/**
+ * Running-median window for new interpretations, m: long enough to take out spikes and thin beds, short against a
+ * pressure ramp (common practice, no source).
+ */
+export const DEFAULT_SMOOTHING_M = 20;
 
 /** Published defaults: Eaton (1975, SPE 5544) exponents 3 (sonic) and 1.2 (resistivity). */
 export const EATON_DEFAULT_EXPONENT = { sonic: 3, resistivity: 1.2 } as const;

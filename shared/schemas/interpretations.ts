@@ -18,11 +18,15 @@ export const trendSchema = z.object({
   gammaCutoffApi: z.number().nullable(),
 });
 
+/** Running-median window applied to the log before the method, m (0: off); versions saved before it read as 0. */
+const smoothingM = z.number().min(0).max(500).default(0);
+
 export const poreMethodSchema = z.discriminatedUnion('method', [
-  z.object({ method: z.literal('eaton-sonic'), exponent: z.number().min(0.1).max(10).default(3) }),
-  z.object({ method: z.literal('eaton-resistivity'), exponent: z.number().min(0.1).max(10).default(1.2) }),
+  z.object({ method: z.literal('eaton-sonic'), exponent: z.number().min(0.1).max(10).default(3), smoothingM }),
+  z.object({ method: z.literal('eaton-resistivity'), exponent: z.number().min(0.1).max(10).default(1.2), smoothingM }),
   z.object({
     method: z.literal('bowers'),
+    smoothingM,
     v0: z.number().default(5000),
     A: z.number().positive(),
     B: z.number().positive(),

@@ -90,6 +90,7 @@ describe('useProfileEditor', () => {
   it('a well with no interpretation starts from the published defaults (Eaton exponent 3) with base null', () => {
     const editor = useProfileEditor(ref(TEAM_A), ref(WELL), ref([]), async () => []);
     expect(editor.baseVersion.value).toBeNull();
-    expect(editor.content.value.pore).toEqual({ method: 'eaton-sonic', exponent: 3 });
+    // Eaton 1975, SPE 5544: exponent 3 on sonic; the 20 m running median is common practice, no source.
+    expect(editor.content.value.pore).toEqual({ method: 'eaton-sonic', exponent: 3, smoothingM: 20 });
   });
 });

@@ -1,6 +1,6 @@
 import { computed, ref, watch, type Ref } from 'vue';
 import type { Interpretation, InterpretationContent } from '@shared/schemas/interpretations';
-import { EATON_DEFAULT_EXPONENT, PROFILE_DEFAULTS, type TopSettings } from '@shared/profile';
+import { DEFAULT_SMOOTHING_M, EATON_DEFAULT_EXPONENT, PROFILE_DEFAULTS, type TopSettings } from '@shared/profile';
 import * as profileApi from '@/api/profile';
 import { ApiClientError } from '@/api/client';
 
@@ -8,13 +8,13 @@ import { ApiClientError } from '@/api/client';
  * A new interpretation: brine 1030 kg/m³, Eaton on sonic with the published exponent 3, and an Eaton (1969)
  * fracture curve with ν rising from 0.30 at the mudline by 0.04 per km — starting values to be calibrated against
  * leak-off tests (common practice, no source). No trend and no top until the interpreter makes them.
- * @example defaultContent().pore; // { method: 'eaton-sonic', exponent: 3 }
+ * @example defaultContent().pore; // { method: 'eaton-sonic', exponent: 3, smoothingM: 20 }
  */
 export function defaultContent(): InterpretationContent {
   return {
     normalDensityKgM3: PROFILE_DEFAULTS.normalDensityKgM3,
     trend: null,
-    pore: { method: 'eaton-sonic', exponent: EATON_DEFAULT_EXPONENT.sonic },
+    pore: { method: 'eaton-sonic', exponent: EATON_DEFAULT_EXPONENT.sonic, smoothingM: DEFAULT_SMOOTHING_M },
     fracture: { method: 'eaton', poissonTop: 0.3, poissonGradientPerKm: 0.04 },
     top: null,
   };
@@ -41,7 +41,7 @@ export type SaveState = 'idle' | 'saving' | 'saved' | 'stale' | 'error';
  * earlier version, saving and restoring.
  * @example
  * const editor = useProfileEditor(teamId, wellId, versions, reloadVersions);
- * editor.content.value.pore = { method: 'eaton-resistivity', exponent: 1.2 };
+ * editor.content.value.pore = { method: 'eaton-resistivity', exponent: 1.2, smoothingM: 20 };
  * await editor.save({ status: 'accepted', note: 'calibrated to RFTs' });
  */
 export function useProfileEditor(

@@ -167,6 +167,22 @@ describe('buildProfile: pore pressure, fracture and top', () => {
     expect(q.poreFilledPa![i]).toBeCloseTo(q.porePa![below] + (11 / 21) * (q.porePa![above] - q.porePa![below]), 3);
   });
 
+  it('a running median over the log takes single-sample spikes out before Eaton', () => {
+    // Cycle-skip spikes: every 37th sample reads 40 µs/ft slow; with a 20 m window each spike is one sample of ~21.
+    const spiky = dt.map((v, i) => (i % 37 === 0 ? v + 40 : v));
+    const raw = buildProfile(input({ logs: { sonicUsFt: spiky, densityKgM3: new Float64Array(tvdM.length).fill(RHO) } }));
+    const base = input().interpretation;
+    const smooth = buildProfile(
+      input({ logs: { sonicUsFt: spiky, densityKgM3: new Float64Array(tvdM.length).fill(RHO) }, interpretation: { ...base, pore: { method: 'eaton-sonic', exponent: 3, smoothingM: 20 } } }),
+    );
+    const spikeDepth = tvdM[37 * 30];
+    const i = indexOf(raw, spikeDepth);
+    // Eaton 1975, SPE 5544, on the constructed log: the spike alone reads far above the known pore pressure…
+    expect(raw.porePa![i] / knownPore(spikeDepth)).toBeGreaterThan(1.1);
+    // …and after the median it reads the known value within the curvature of a 20 m window of a smooth log.
+    expect(smooth.porePa![i] / knownPore(spikeDepth)).toBeCloseTo(1, 2);
+  });
+
   it('says why there is no pore curve when the method lacks its trend', () => {
     const q = buildProfile(input({ interpretation: { ...input().interpretation, trend: null } }));
     expect(q.porePa).toBeNull();
