@@ -234,7 +234,7 @@ export function fitNormalTrend(depthM: NumericArray, values: NumericArray, optio
   if (model !== 'exponential' && model !== 'loglinear') {
     throw new Error(`${FN}: model must be "exponential" or "loglinear" (got "${String(model)}")`);
   }
-  const fromM = param(FN, 'fromM', options.fromM);
+  const fromM = param(FN, 'fromM', options.fromM, { min: 0 });
   const toM = param(FN, 'toM', options.toM);
   if (!(toM > fromM)) throw new Error(`${FN}: toM must be greater than fromM (got ${fromM} and ${toM})`);
   const matrixValue =
@@ -245,8 +245,12 @@ export function fitNormalTrend(depthM: NumericArray, values: NumericArray, optio
 
   const zs: number[] = [];
   const ys: number[] = [];
+  let previous = -Infinity;
   for (let i = 0; i < n; i++) {
     const z = depthM[i];
+    // Samples above the interval (even at negative depths, above the mudline) are simply outside it; order is not.
+    if (z < previous) throw new Error(`${FN}: depthM must be sorted ascending (depthM[${i}] = ${z} after ${previous})`);
+    if (!Number.isNaN(z)) previous = z;
     const y = values[i];
     if (Number.isNaN(z) || Number.isNaN(y)) continue;
     if (!Number.isFinite(z) || !Number.isFinite(y)) {

@@ -7,11 +7,12 @@ import {
   maxAllowableMudWeight,
 } from '@shared/pressure';
 
-const PSI_FT_PER_PPG = 12 / 231; // REFERENCES.md: 0.051948 psi/ft per ppg, exact
+const PSI_FT_PER_PPG = 12 / 231; // 0.051948 psi/ft per ppg, exact from 1 US gal = 231 in³ (US customary definition)
 
 describe('fractureEaton', () => {
   it('reproduces the handbook example: 12,000 ft, 12 ppg pore, S/D 0.96, ν 0.47 → 0.92 psi/ft, 17.7 ppg', () => {
-    // Eaton 1969, JPT 21(10) (SPE 2163), worked example as listed in REFERENCES.md; tolerance 0.5 %.
+    // Eaton 1969, JPT 21(10) (SPE 2163): the worked example as drilling-engineering handbooks reproduce it
+    // (values recalled from memory, not checked against a copy here); tolerance 0.5 %.
     const depthFt = 12_000;
     const S = convert(0.96 * depthFt, 'psi', 'Pa');
     const P = convert(12 * PSI_FT_PER_PPG * depthFt, 'psi', 'Pa');
@@ -61,7 +62,7 @@ describe('fractureMatthewsKelly', () => {
 
 describe('maxAllowableMudWeight', () => {
   it('10 ppg test mud, 800 psi at a 5000 ft shoe → 13.08 ppg', () => {
-    // REFERENCES.md: MW_max = MW_test + p_surface/(0.051948 × TVD_shoe) = 10 + 800/(0.051948 × 5000) = 13.080 ppg.
+    // Leak-off test arithmetic as field practice states it (common practice, no single source): MW_max = MW_test + p_surface/(0.051948 × TVD_shoe) = 10 + 800/(0.051948 × 5000) = 13.080 ppg.
     const rho = maxAllowableMudWeight({
       testMudKgM3: convert(10, 'ppg', 'kg/m3'),
       surfacePressurePa: convert(800, 'psi', 'Pa'),

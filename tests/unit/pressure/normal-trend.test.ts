@@ -99,6 +99,12 @@ describe('fitNormalTrend errors', () => {
     expect(() => fitNormalTrend([1, 2, 3], [1, 0, 3], { model: 'loglinear', fromM: 0, toM: 5 })).toThrow(
       new Error('fitNormalTrend: loglinear values must be > 0 (got 0 at 2 m)'),
     );
+    expect(() => fitNormalTrend([1, 3, 2], [1, 2, 3], { model: 'loglinear', fromM: 0, toM: 5 })).toThrow(
+      new Error('fitNormalTrend: depthM must be sorted ascending (depthM[2] = 2 after 3)'),
+    );
+    expect(() => fitNormalTrend([1, 2, 3], [1, 2, 3], { model: 'loglinear', fromM: -5, toM: 5 })).toThrow(
+      new Error('fitNormalTrend: fromM must be >= 0 (got -5)'),
+    );
     expect(() => fitNormalTrend([1, 2], [1, 2, 3], { model: 'loglinear', fromM: 0, toM: 5 })).toThrow(
       new Error('fitNormalTrend: values has length 3 but depthM has length 2'),
     );

@@ -6,9 +6,9 @@ const DEG = Math.PI / 180;
 
 describe('minimumCurvature', () => {
   it('reproduces the widely published 3500 ft → 3600 ft example', () => {
-    // Source: the widely reproduced drilling-formula example of the minimum-curvature method
-    // (Sawaryn & Thorogood 2005 formulas): 3500 ft, 15°, 20° → 3600 ft, 25°, 45°:
-    // ΔN ≈ 27.22 ft, ΔE ≈ 19.45 ft, ΔTVD ≈ 94.01 ft (published to 0.01 ft).
+    // Minimum curvature (Taylor & Mason 1972; formulas as in Sawaryn & Thorogood 2005, SPE Drill. & Compl. 20(1)):
+    // the widely reproduced example 3500 ft, 15°, 20° → 3600 ft, 25°, 45° gives ΔN ≈ 27.22 ft, ΔE ≈ 19.45 ft,
+    // ΔTVD ≈ 94.01 ft (values recalled from memory; the exact-arc test below checks the method independently).
     const tieIn = { mdM: 3500 * FT, tvdM: 3000 * FT, northM: 100 * FT, eastM: -50 * FT, incDeg: 15, aziDeg: 20 };
     const [a, b] = minimumCurvature(
       [
