@@ -31,7 +31,34 @@ export function toLonLat(x: number, y: number, epsg: number): LonLat {
   if (!(lon >= -180 && lon <= 180) || !(lat >= -90 && lat <= 90)) {
     throw new Error(`(${x}, ${y}) in EPSG:${epsg} is outside the world (lon ${lon.toFixed(3)}, lat ${lat.toFixed(3)})`);
   }
+  const outside = outsideUtmZone(lon, lat, epsg);
+  if (outside) throw new Error(`(${x}, ${y}) in EPSG:${epsg} ${outside}: are easting and northing swapped, or is the EPSG code wrong?`);
   return { lon, lat };
+}
+
+/** Zones are 6° wide; 6° from the central meridian leaves a zone's width of slack for wells just over a zone edge. */
+export const UTM_MAX_DEGREES_FROM_CENTRAL_MERIDIAN = 6;
+
+/**
+ * Why lon/lat cannot have come from a point of the WGS 84 / UTM zone `epsg`, or null when it can (or
+ * `epsg` is not UTM). proj4 converts any easting/northing to some lon/lat, so a swapped pair lands
+ * far from the zone or in the other hemisphere instead of failing: this is what catches it.
+ * @example outsideUtmZone(-19.2, -43.1, 32713) // 'lies at lon -19.200, 85.8° from the zone 13 central meridian (105°W)'
+ */
+export function outsideUtmZone(lon: number, lat: number, epsg: number): string | null {
+  const north = epsg >= 32601 && epsg <= 32660;
+  const south = epsg >= 32701 && epsg <= 32760;
+  if (!north && !south) return null;
+  const zone = epsg - (north ? 32600 : 32700);
+  const centralLon = -183 + 6 * zone;
+  const offset = Math.abs((((lon - centralLon) % 360) + 540) % 360 - 180);
+  const meridian = `${Math.abs(centralLon)}°${centralLon < 0 ? 'W' : 'E'}`;
+  if (offset > UTM_MAX_DEGREES_FROM_CENTRAL_MERIDIAN) {
+    return `lies at lon ${lon.toFixed(3)}, ${offset.toFixed(1)}° from the zone ${zone} central meridian (${meridian})`;
+  }
+  if (north && lat < 0) return `lies at lat ${lat.toFixed(3)}, south of the equator, but zone ${zone}N is for the northern hemisphere`;
+  if (south && lat > 0) return `lies at lat ${lat.toFixed(3)}, north of the equator, but zone ${zone}S is for the southern hemisphere`;
+  return null;
 }
 
 /**
