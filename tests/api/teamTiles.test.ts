@@ -1,6 +1,9 @@
+import { createHash } from 'node:crypto';
 import { VectorTile } from '@mapbox/vector-tile';
 import { PbfReader } from 'pbf';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import supertest from 'supertest';
+import { createApp } from '../../server/app';
 import { freshTeamAgent, memberAgent, startTestApp, type TestContext } from './support/testApp';
 
 let ctx: TestContext;
@@ -83,6 +86,35 @@ describe('team vector tiles from PostGIS', () => {
     const after = await getTile(team.agent, 'prospects', 10, -101, -32.5);
     expect(after.status).toBe(200);
     expect(decode(after.body).layers.prospects.feature(0).properties.name).toBe('Tile box');
+  });
+
+  it('tags a tile with a hash of its bytes, so a restarted server agrees and an edit of equal length does not', async () => {
+    const res = await getTile(team.agent, 'wells', 13, -101, -32.5);
+    expect(res.status).toBe(200);
+    // Reference: SHA-256 from node:crypto over the bytes received.
+    expect(res.headers.etag).toBe(`"${createHash('sha256').update(res.body).digest('base64url')}"`);
+    const { x, y } = tileOf(-101, -32.5, 13);
+    const again = await team.agent.get(`${base}/tiles/wells/13/${x}/${y}.mvt`).set('If-None-Match', res.headers.etag);
+    expect(again.status).toBe(304);
+    // A second app stands in for a restart: its change counter starts from 0 again, the tag stays the same.
+    const restarted = createApp({ db: ctx.db, env: ctx.env, mailer: ctx.mailer, serveClient: false });
+    const other = supertest.agent(restarted);
+    expect((await other.post('/api/auth/sign-in').send({ email: team.email, password: team.password })).status).toBe(200);
+    const fresh = await other.get(`${base}/tiles/wells/13/${x}/${y}.mvt`).set('If-None-Match', res.headers.etag);
+    expect(fresh.status).toBe(304);
+    // Renaming T-0 to T-Z keeps the tile's length but changes its bytes: no 304 for the old tag.
+    const list = await team.agent.get(`${base}/wells?q=T-0&limit=5`);
+    const t0 = (list.body.items as { id: string; name: string }[]).find((w) => w.name === 'T-0');
+    expect(t0).toBeDefined();
+    const detail = await team.agent.get(`${base}/wells/${t0!.id}`);
+    const renamed = await team.agent.patch(`${base}/wells/${t0!.id}`).send({ name: 'T-Z', version: detail.body.version });
+    expect(renamed.status).toBe(200);
+    const edited = await getTile(team.agent, 'wells', 13, -101, -32.5);
+    expect(edited.body.length).toBe(res.body.length);
+    expect(edited.headers.etag).not.toBe(res.headers.etag);
+    const revalidated = await team.agent.get(`${base}/tiles/wells/13/${x}/${y}.mvt`).set('If-None-Match', res.headers.etag);
+    expect(revalidated.status).toBe(200);
+    await team.agent.patch(`${base}/wells/${t0!.id}`).send({ name: 'T-0', version: renamed.body.version });
   });
 
   it('gives team B nothing of team A', async () => {

@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { Db } from '../../db/client';
@@ -20,10 +21,10 @@ function layerOf(name: string): TeamLayer | null {
   return m ? { kind: 'reference', layerId: m[1] } : null;
 }
 
-/** Team vector tiles from PostGIS (`ST_AsMVT`), cached briefly and keyed by the team's change counter. */
+/** Team vector tiles from PostGIS (`ST_AsMVT`), cached briefly and keyed by the team's change counter; the ETag hashes the bytes. */
 export function teamTilesRouter(db: Db, changes: TeamChanges, { cache: useCache = true } = {}): Router {
   const r = Router({ mergeParams: true });
-  const cache = new TtlCache<Buffer>(useCache ? 4000 : 0, 60_000);
+  const cache = new TtlCache<{ tile: Buffer; etag: string }>(useCache ? 4000 : 0, 60_000);
   r.get('/:teamId/tiles/:layer/:z/:x/:y.mvt', requireTeam('team.read'), async (req, res) => {
     const p = params.safeParse(req.params);
     const layer = p.success ? layerOf(p.data.layer) : null;
@@ -33,12 +34,15 @@ export function teamTilesRouter(db: Db, changes: TeamChanges, { cache: useCache 
     const teamId = teamIdOf(req);
     const generation = changes.generation(teamId);
     const key = `${teamId}:${generation}:${p.data.layer}:${zoom}/${x}/${y}`;
-    let tile = cache.get(key);
-    if (!tile) {
-      tile = await teamTile(db, teamId, layer, zoom, x, y);
-      cache.set(key, tile);
+    let hit = cache.get(key);
+    if (!hit) {
+      const bytes = await teamTile(db, teamId, layer, zoom, x, y);
+      // A hash of the bytes, not the change counter: the counter restarts at 0 with the server, and an
+      // edited tile of the same length must never be answered 304.
+      hit = { tile: bytes, etag: `"${createHash('sha256').update(bytes).digest('base64url')}"` };
+      cache.set(key, hit);
     }
-    const etag = `"g${generation}-${zoom}-${x}-${y}-${tile.length}"`;
+    const { tile, etag } = hit;
     res.setHeader('ETag', etag);
     res.setHeader('Cache-Control', 'private, max-age=0, must-revalidate');
     if (req.headers['if-none-match'] === etag) return void res.status(304).end();
