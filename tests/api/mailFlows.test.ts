@@ -1,8 +1,8 @@
 import supertest from 'supertest';
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { users } from '../../server/db/schema';
-import { linkToken, signedInAgent, startTestApp, waitForMail, type TestContext } from './support/testApp';
+import { invitations, memberships, users } from '../../server/db/schema';
+import { freshTeamAgent, linkToken, signedInAgent, startTestApp, waitForMail, type TestContext } from './support/testApp';
 
 let ctx: TestContext;
 beforeAll(async () => {
@@ -53,6 +53,71 @@ describe('invitation by e-mail', () => {
     const short = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: 'x'.repeat(43), password: 'short' });
     expect(short.status).toBe(400);
     expect(short.body.error.details).toEqual([{ path: 'password', message: 'must be at least 10 characters' }]);
+  });
+});
+
+describe('invitation to an e-mail that already has an account (takeover regression)', () => {
+  it("an admin of team A cannot take over a team-B user by inviting them and accepting the link from A's Outbox", async () => {
+    const attacker = await freshTeamAgent(ctx, 'Takeover attacker team', 'admin');
+    const victim = await freshTeamAgent(ctx, 'Takeover victim team', 'viewer');
+    const since = new Date(Date.now() - 1000);
+    const inv = await attacker.agent.post(`/api/teams/${attacker.teamId}/invitations`).send({ email: victim.email, name: 'Victim', role: 'admin' });
+    expect(inv.status).toBe(201);
+    await waitForMail(ctx.db, victim.email, since);
+
+    // The attacker also asks for a reset mail: it must never appear in their Outbox.
+    const resetAsk = await supertest(ctx.app).post('/api/auth/reset-request').send({ email: victim.email });
+    expect(resetAsk.status).toBe(202);
+    const resetMail = await waitForMail(ctx.db, victim.email, new Date(Date.now() - 200));
+    expect(resetMail.subject).toMatch(/Reset/);
+    expect(resetMail.teamId).toBeNull();
+
+    const outbox = await attacker.agent.get(`/api/teams/${attacker.teamId}/outbox`);
+    expect(outbox.status).toBe(200);
+    const visible = outbox.body as { to: string; subject: string; text: string }[];
+    expect(visible.some((m) => /reset-password/.test(m.text))).toBe(false);
+    const invite = visible.find((m) => m.to === victim.email && /accept-invite/.test(m.text));
+    expect(invite).toBeDefined();
+    const token = linkToken(invite!.text, '/accept-invite');
+
+    const takeover = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token, password: 'attacker-chosen-password' });
+    expect(takeover.status).toBe(401);
+    expect(takeover.body.error.code).toBe('existing_account_password');
+    expect(takeover.body.error.message).toMatch(/already has a Porelith account/);
+    expect(takeover.headers['set-cookie']).toBeUndefined();
+
+    // Nothing was written: the invitation is still open, no membership, the password is unchanged.
+    const [row] = await ctx.db.select().from(invitations).where(eq(invitations.id, inv.body.id));
+    expect(row.acceptedAt).toBeNull();
+    const joined = await ctx.db.select().from(memberships).where(and(eq(memberships.userId, victim.userId), eq(memberships.teamId, attacker.teamId)));
+    expect(joined).toEqual([]);
+    const asAttacker = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: victim.email, password: 'attacker-chosen-password' });
+    expect(asAttacker.status).toBe(401);
+    const asVictim = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: victim.email, password: victim.password });
+    expect(asVictim.status).toBe(200);
+  });
+
+  it('the invited user joins with their current password, which stays as it was', async () => {
+    const inviter = await freshTeamAgent(ctx, 'Joining team', 'admin');
+    const member = await freshTeamAgent(ctx, 'Home team', 'planner');
+    const since = new Date(Date.now() - 1000);
+    await inviter.agent.post(`/api/teams/${inviter.teamId}/invitations`).send({ email: member.email, name: 'Renamed?', role: 'geoscientist' });
+    const mail = await waitForMail(ctx.db, member.email, since);
+    expect(mail.textBody).toMatch(/current password/);
+    expect(mail.textBody).toContain('&existing=1');
+    const token = linkToken(mail.textBody, '/accept-invite');
+
+    const accept = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token, password: member.password });
+    expect(accept.status).toBe(200);
+    expect(accept.body.memberships.map((m: { teamId: string; role: string }) => [m.teamId, m.role])).toEqual(
+      expect.arrayContaining([
+        [inviter.teamId, 'geoscientist'],
+        [member.teamId, 'planner'],
+      ]),
+    );
+    expect(accept.body.user.name).not.toBe('Renamed?');
+    const signIn = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: member.email, password: member.password });
+    expect(signIn.status).toBe(200);
   });
 });
 

@@ -3,8 +3,9 @@ import { and, eq, gt, isNull, sql } from 'drizzle-orm';
 import type { Session } from '../../../shared/schemas/auth';
 import type { Db } from '../../db/client';
 import { invitations, memberships, passwordResets, teams, users } from '../../db/schema';
-import { HttpError, badRequest } from '../../lib/httpError';
+import { HttpError, badRequest, conflict } from '../../lib/httpError';
 import type { Mailer } from '../mail/mailer';
+import { INVITE_DAYS } from '../teams/teams.service';
 import { hashLinkToken, newLinkToken } from './linkTokens';
 
 const RESET_MINUTES = 60;
@@ -15,6 +16,21 @@ const DUMMY_HASH = bcrypt.hashSync('porelith-no-such-user', BCRYPT_ROUNDS);
 const invalidCredentials = () => new HttpError(401, 'invalid_credentials', 'The e-mail or password is not right.');
 const invalidToken = () =>
   badRequest('invalid_token', 'This link is not valid any more: it was used already, has expired, or was mistyped.');
+// Same code as any dead link (the client treats them alike), but the message says what to do next.
+const expiredInvitation = () =>
+  badRequest('invalid_token', `This invitation link has expired (links last ${INVITE_DAYS} days); ask your team admin to invite you again.`, {
+    reason: 'expired',
+  });
+const expiredReset = () =>
+  badRequest('invalid_token', `This password-reset link has expired (links last ${RESET_MINUTES} minutes); ask for a new one from the sign-in page.`, {
+    reason: 'expired',
+  });
+const existingAccountPassword = (email: string) =>
+  new HttpError(
+    401,
+    'existing_account_password',
+    `${email} already has a Porelith account: enter that account’s current password to join the team (it is not changed). Forgot it? Reset it from the sign-in page first.`,
+  );
 
 /** The user with every team membership, as the API returns it. */
 export async function loadSession(db: Db, userId: string): Promise<Session | null> {
@@ -73,25 +89,47 @@ export async function resetPassword(db: Db, token: string, password: string): Pr
   });
 }
 
-/** Consumes an invitation (once, atomically): creates or updates the user and adds the membership. */
+/**
+ * Consumes an invitation (once, atomically) and adds the membership.
+ * For a new e-mail it creates the account with the chosen password. For an e-mail that already has an
+ * account, `password` must be that account's current password and is never changed: otherwise whoever can
+ * read the invitation (the inviting team's admins see it in their Outbox) could take the account over.
+ */
 export async function acceptInvitation(db: Db, token: string, password: string): Promise<string> {
-  const hash = await bcrypt.hash(password, BCRYPT_ROUNDS);
+  const tokenHash = hashLinkToken(token);
+  const [inv] = await db.select().from(invitations).where(eq(invitations.tokenHash, tokenHash));
+  if (!inv || inv.acceptedAt) throw invalidToken();
+  if (inv.expiresAt.getTime() <= Date.now()) throw expiredInvitation();
+  const [existing] = await db.select({ id: users.id, hash: users.passwordHash }).from(users).where(eq(users.email, inv.email));
+  if (existing) {
+    // A password-less account cannot prove ownership here; its owner sets one through a reset mail.
+    const ok = await bcrypt.compare(password, existing.hash ?? DUMMY_HASH);
+    if (!existing.hash || !ok) throw existingAccountPassword(inv.email);
+  }
+  const newHash = existing ? null : await bcrypt.hash(password, BCRYPT_ROUNDS);
   return db.transaction(async (tx) => {
-    const [inv] = await tx
+    // Re-checked here so two tabs accepting the same link cannot both succeed.
+    const [claimed] = await tx
       .update(invitations)
       .set({ acceptedAt: sql`now()` })
-      .where(and(eq(invitations.tokenHash, hashLinkToken(token)), isNull(invitations.acceptedAt), gt(invitations.expiresAt, sql`now()`)))
-      .returning();
-    if (!inv) throw invalidToken();
-    const [user] = await tx
-      .insert(users)
-      .values({ email: inv.email, name: inv.name, passwordHash: hash })
-      .onConflictDoUpdate({ target: users.email, set: { passwordHash: hash } })
-      .returning({ id: users.id });
+      .where(and(eq(invitations.id, inv.id), isNull(invitations.acceptedAt), gt(invitations.expiresAt, sql`now()`)))
+      .returning({ id: invitations.id });
+    if (!claimed) throw invalidToken();
+    let userId = existing?.id;
+    if (!userId) {
+      const [created] = await tx
+        .insert(users)
+        .values({ email: inv.email, name: inv.name, passwordHash: newHash })
+        .onConflictDoNothing({ target: users.email })
+        .returning({ id: users.id });
+      // The account appeared since the check above; never overwrite it, the person can simply retry.
+      if (!created) throw conflict('An account for this e-mail was created meanwhile; open the link again and enter that account’s password.');
+      userId = created.id;
+    }
     await tx
       .insert(memberships)
-      .values({ teamId: inv.teamId, userId: user.id, role: inv.role })
+      .values({ teamId: inv.teamId, userId, role: inv.role })
       .onConflictDoUpdate({ target: [memberships.teamId, memberships.userId], set: { role: inv.role } });
-    return user.id;
+    return userId;
   });
 }

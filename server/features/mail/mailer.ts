@@ -5,7 +5,7 @@ export interface OutgoingMail {
   to: string;
   subject: string;
   text: string;
-  /** Lets the Outbox show the message to that team's admins. */
+  /** Shows the message to that team's admins in the Outbox; leave unset for anything personal (reset mail). */
   teamId?: string;
 }
 

@@ -7,7 +7,7 @@ import { conflict, notFound } from '../../lib/httpError';
 import { newLinkToken } from '../auth/linkTokens';
 import type { Mailer } from '../mail/mailer';
 
-const INVITE_DAYS = 7;
+export const INVITE_DAYS = 7;
 
 export async function listMembers(db: Db, teamId: string): Promise<Member[]> {
   const rows = await db
@@ -27,12 +27,14 @@ export async function inviteMember(
   invitedBy: string,
   body: InviteBody,
 ): Promise<{ id: string; email: string; role: Role; expiresAt: string }> {
-  const [already] = await db
-    .select({ id: users.id })
-    .from(users)
-    .innerJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.teamId, teamId)))
-    .where(eq(users.email, body.email));
-  if (already) throw conflict(`${body.email} is already a member of this team.`);
+  const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, body.email));
+  if (existing) {
+    const [member] = await db
+      .select({ role: memberships.role })
+      .from(memberships)
+      .where(and(eq(memberships.userId, existing.id), eq(memberships.teamId, teamId)));
+    if (member) throw conflict(`${body.email} is already a member of this team.`);
+  }
   const [team] = await db.select({ name: teams.name }).from(teams).where(eq(teams.id, teamId));
   const [inviter] = await db.select({ name: users.name }).from(users).where(eq(users.id, invitedBy));
   const { token, hash } = newLinkToken();
@@ -41,14 +43,17 @@ export async function inviteMember(
     .insert(invitations)
     .values({ teamId, email: body.email, name: body.name, role: body.role, tokenHash: hash, invitedBy, expiresAt })
     .returning({ id: invitations.id });
+  // An existing account joins with its current password (which the link never changes); `existing=1`
+  // only picks the matching form in the client, the server decides from the account itself.
+  const link = `${appUrl}/accept-invite?token=${token}${existing ? '&existing=1' : ''}`;
+  const what = existing
+    ? `You already have a Porelith account: open this link within ${INVITE_DAYS} days and confirm with your current password to join; it works once:`
+    : `Open this link within ${INVITE_DAYS} days to set your password; it works once:`;
   await mailer.send({
     to: body.email,
     teamId,
     subject: `You are invited to the team "${team.name}" on Porelith`,
-    text:
-      `Hello ${body.name},\n\n${inviter?.name ?? 'A team admin'} invited you to join "${team.name}" on Porelith as ${body.role}.\n` +
-      `Open this link within ${INVITE_DAYS} days to set your password; it works once:\n\n` +
-      `${appUrl}/accept-invite?token=${token}\n`,
+    text: `Hello ${body.name},\n\n${inviter?.name ?? 'A team admin'} invited you to join "${team.name}" on Porelith as ${body.role}.\n${what}\n\n${link}\n`,
   });
   return { id: inv.id, email: body.email, role: body.role, expiresAt: expiresAt.toISOString() };
 }
