@@ -1,4 +1,4 @@
-import { pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
+import { integer, pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
 import { createdAt, id } from './columns';
 
 /** People who can sign in. Email is stored lower-case; the hash is bcrypt. */
@@ -7,8 +7,26 @@ export const users = pgTable('users', {
   email: text().notNull().unique(),
   name: text().notNull(),
   passwordHash: text(),
+  /** Carried in every session token; a password reset bumps it, which ends every earlier session. */
+  sessionVersion: integer().notNull().default(0),
   createdAt: createdAt(),
 });
+
+/**
+ * Sessions ended by signing out, by the id their token carries. A row only needs to outlive the
+ * longest token that could still carry that id, so expired rows are pruned.
+ */
+export const revokedSessions = pgTable(
+  'revoked_sessions',
+  {
+    sessionId: uuid().primaryKey(),
+    userId: uuid()
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+  },
+  (t) => [index().on(t.expiresAt)],
+);
 
 /** Single-use password-reset links; only the SHA-256 of the token is kept. */
 export const passwordResets = pgTable(
