@@ -12,3 +12,4 @@ export * from './calibration';
 export * from './window';
 export * from './buildProfile';
 export * from './csv';
+export * from './atDepth';

@@ -1,12 +1,37 @@
 import { z } from 'zod';
 
 /** Interpolated surfaces over a prospect: what the client asks for and what the server returns. */
-export const SURFACE_QUANTITIES = ['top_tvdss', 'top_below_mudline'] as const;
+export const SURFACE_QUANTITIES = ['top_tvdss', 'top_below_mudline', 'emw_at_depth', 'overpressure_at_depth'] as const;
 export type SurfaceQuantity = (typeof SURFACE_QUANTITIES)[number];
 export const SURFACE_QUANTITY_LABELS: Record<SurfaceQuantity, string> = {
   top_tvdss: 'Top of overpressure, depth below sea level',
-  top_below_mudline: 'Top of overpressure, depth below mudline',
+  top_below_mudline: 'Top of overpressure, depth below mudline (or ground)',
+  emw_at_depth: 'Pore-pressure EMW at a depth',
+  overpressure_at_depth: 'Overpressure at a depth',
 };
+
+/** What kind of value each quantity maps, and the SI unit its values, residuals and standard deviations are in. */
+export const SURFACE_QUANTITY_KINDS = { top_tvdss: 'depth', top_below_mudline: 'depth', emw_at_depth: 'emw', overpressure_at_depth: 'pressure' } as const satisfies Record<SurfaceQuantity, string>;
+export type SurfaceQuantityKind = (typeof SURFACE_QUANTITY_KINDS)[SurfaceQuantity];
+export const SURFACE_KIND_SI_UNITS = { depth: 'm', emw: 'kg/m3', pressure: 'Pa' } as const satisfies Record<SurfaceQuantityKind, string>;
+export type SurfaceSiUnit = (typeof SURFACE_KIND_SI_UNITS)[SurfaceQuantityKind];
+
+/** The quantities read off each well's pore-pressure profile at a depth the user gives. */
+export const AT_DEPTH_QUANTITIES: readonly SurfaceQuantity[] = ['emw_at_depth', 'overpressure_at_depth'];
+
+/**
+ * The SI unit of a quantity's values.
+ * @example surfaceSiUnit('overpressure_at_depth') // 'Pa'
+ */
+export function surfaceSiUnit(quantity: SurfaceQuantity): SurfaceSiUnit {
+  return SURFACE_KIND_SI_UNITS[SURFACE_QUANTITY_KINDS[quantity]];
+}
+
+/**
+ * Default contour spacing per kind, in its SI unit: 50 m of depth, 20 kg/m³ of EMW (≈ 0.02 sg, 0.17 ppg),
+ * 1 MPa of overpressure (common practice, no source).
+ */
+export const DEFAULT_CONTOUR_INTERVALS = { depth: 50, emw: 20, pressure: 1e6 } as const satisfies Record<SurfaceQuantityKind, number>;
 
 /** Largest grid a run may ask for: 250,000 cells (e.g. 500 × 500). */
 export const MAX_SURFACE_CELLS = 250_000;
@@ -38,21 +63,53 @@ export const surfaceRequestBody = z.object({
   cellSizeM: z.number().min(25, 'must be at least 25 m').max(10_000).default(250),
   /** The grid covers the prospect outline grown by this much, m. */
   extentBufferKm: z.number().min(0).max(100).default(5),
+  /** Contour spacing of depth quantities, m. */
   contourIntervalM: z.number().positive().max(2000).default(50),
+  /** Contour spacing of `emw_at_depth`, kg/m³ (default 20). */
+  contourIntervalKgM3: z.number().positive().max(1000).optional(),
+  /** Contour spacing of `overpressure_at_depth`, Pa (default 1 MPa). */
+  contourIntervalPa: z.number().positive().max(1e8).optional(),
+  /** The depth of `emw_at_depth` and `overpressure_at_depth`, TVD below sea level, m (required for those). */
+  depthTvdssM: z.number().min(0, 'must be at or below sea level (>= 0 m TVDSS)').max(15_000, 'must be at most 15000 m TVDSS').optional(),
+}).superRefine((b, ctx) => {
+  if (AT_DEPTH_QUANTITIES.includes(b.quantity) && b.depthTvdssM === undefined) {
+    ctx.addIssue({ code: 'custom', path: ['depthTvdssM'], message: `is required for ${b.quantity}: the depth below sea level, m` });
+  }
 });
 export type SurfaceRequest = z.input<typeof surfaceRequestBody>;
+
+/**
+ * The contour spacing a request asks for, in the SI unit of its quantity.
+ * @example contourIntervalOf(surfaceRequestBody.parse({ quantity: 'overpressure_at_depth', depthTvdssM: 3000 })) // 1000000
+ */
+export function contourIntervalOf(b: z.output<typeof surfaceRequestBody>): number {
+  const kind = SURFACE_QUANTITY_KINDS[b.quantity];
+  if (kind === 'emw') return b.contourIntervalKgM3 ?? DEFAULT_CONTOUR_INTERVALS.emw;
+  if (kind === 'pressure') return b.contourIntervalPa ?? DEFAULT_CONTOUR_INTERVALS.pressure;
+  return b.contourIntervalM;
+}
 
 export const surfaceWellSchema = z.object({
   wellId: z.string().uuid(),
   name: z.string(),
   lon: z.number(),
   lat: z.number(),
+  /** The well's value, in the surface's `unit`. */
   value: z.number(),
   interpretationVersion: z.number().nullable(),
-  /** Leave-one-out: predicted − observed, m. */
+  /** Leave-one-out: predicted − observed, in the surface's `unit`. */
   residual: z.number().nullable(),
   predicted: z.number().nullable(),
+  /** For quantities at a depth: what the well's profile gives there (TVD below its rig datum, pressures in Pa). */
+  atDepth: z
+    .object({ tvdM: z.number(), porePa: z.number(), hydrostaticPa: z.number(), overburdenPa: z.number(), poreEmwKgM3: z.number(), overpressurePa: z.number() })
+    .nullable()
+    .optional(),
 });
+
+/** A well of the chosen set that the run left out, and why (no accepted TOP, logs not reaching the depth…). */
+export const surfaceExcludedWellSchema = z.object({ wellId: z.string().uuid(), name: z.string(), reason: z.string() });
+export type SurfaceExcludedWell = z.infer<typeof surfaceExcludedWellSchema>;
 
 export const surfaceSummarySchema = z.object({
   id: z.string().uuid(),
@@ -62,6 +119,13 @@ export const surfaceSummarySchema = z.object({
   method: z.string(),
   cellSizeM: z.number(),
   wellCount: z.number(),
+  /** SI unit of the values, residuals, standard deviations and RMSE: m, kg/m3 or Pa. */
+  unit: z.enum(['m', 'kg/m3', 'Pa']),
+  /** The depth of an at-depth quantity, TVD below sea level, m; null for TOP surfaces. */
+  depthTvdssM: z.number().nullable(),
+  /** Leave-one-out RMSE in `unit`. */
+  rmse: z.number().nullable(),
+  /** The same RMSE for depth quantities only (m); null for EMW and overpressure surfaces. */
   rmseM: z.number().nullable(),
   createdBy: z.string().nullable(),
   createdByName: z.string().nullable(),
@@ -96,6 +160,8 @@ export const surfaceSchema = surfaceSummarySchema.extend({
     .nullable(),
   crossValidation: z.object({ rmse: z.number(), meanError: z.number() }),
   wells: z.array(surfaceWellSchema),
+  /** Wells of the chosen set left out of the run, each with its reason (runs stored before this list: empty). */
+  excluded: z.array(surfaceExcludedWellSchema),
   warnings: z.array(z.string()),
 });
 export type Surface = z.infer<typeof surfaceSchema>;

@@ -12,7 +12,7 @@ import {
   type DataPoint,
   type Variogram,
 } from '../../../shared/interpolation';
-import { MAX_SURFACE_CELLS, surfaceRequestBody, type Surface } from '../../../shared/schemas/surfaces';
+import { MAX_SURFACE_CELLS, contourIntervalOf, surfaceRequestBody, surfaceSiUnit, type Surface } from '../../../shared/schemas/surfaces';
 import type { z } from 'zod';
 
 export type SurfaceParams = z.output<typeof surfaceRequestBody>;
@@ -22,8 +22,10 @@ export interface SurfaceInputPoint {
   name: string;
   lon: number;
   lat: number;
+  /** In the SI unit of the run's quantity (m, kg/m³ or Pa). */
   value: number;
   interpretationVersion: number | null;
+  atDepth?: Surface['wells'][number]['atDepth'];
 }
 
 export interface SurfaceInput {
@@ -43,6 +45,20 @@ type Progress = (phase: string, done: number, total: number) => void;
 /** Two wells closer than this are one location for the interpolation. */
 const SAME_LOCATION_M = 1;
 const EXPERIMENTAL_LAGS = 12;
+/** Cells estimated between two progress reports: often enough for a bar to move, rare enough to cost nothing. */
+const PROGRESS_CHUNK = 2000;
+/** More contour levels than this would draw a solid smear; the interval is widened and the run says so. */
+const MAX_CONTOUR_LEVELS = 200;
+
+/** Estimates the targets in chunks so the worker can report progress during the interpolation itself. */
+function inChunks<T, R>(targets: readonly T[], estimate: (chunk: T[]) => R[], progress: Progress): R[] {
+  const out: R[] = [];
+  for (let start = 0; start < targets.length; start += PROGRESS_CHUNK) {
+    for (const e of estimate(targets.slice(start, start + PROGRESS_CHUNK))) out.push(e);
+    progress('interpolating', Math.min(start + PROGRESS_CHUNK, targets.length), targets.length);
+  }
+  return out;
+}
 
 /**
  * A local azimuthal equidistant frame about the prospect centre: distances from the centre are true and,
@@ -118,10 +134,12 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
       variogram = fitVariogram(experimental, { model: params.method.model });
       fitted = true;
     }
-    const k = ordinaryKriging(data, variogram, targets, { maxNeighbours: Math.min(params.method.maxNeighbours, data.length) });
-    estimates = k.map((e) => ({ value: e.value, variance: e.variance }));
+    const v = variogram;
+    const maxNeighbours = Math.min(params.method.maxNeighbours, data.length);
+    estimates = inChunks(targets, (chunk) => ordinaryKriging(data, v, chunk, { maxNeighbours }).map((e) => ({ value: e.value, variance: e.variance })), progress);
   } else {
-    estimates = idw(data, targets, { power: params.method.power }).map((value) => ({ value, variance: null }));
+    const power = params.method.power;
+    estimates = inChunks(targets, (chunk) => idw(data, chunk, { power }).map((value) => ({ value, variance: null as number | null })), progress);
   }
   progress('cross-validating', targets.length, targets.length);
 
@@ -147,7 +165,13 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
 
   // Contour bands: each feature is the region at or beyond its value (d3-contour), as a MultiPolygon.
   progress('contouring', 0, 1);
-  const interval = params.contourIntervalM;
+  const unit = surfaceSiUnit(params.quantity);
+  let interval = contourIntervalOf(params);
+  if ((max - min) / interval > MAX_CONTOUR_LEVELS) {
+    const wider = (max - min) / MAX_CONTOUR_LEVELS;
+    warnings.push(`A contour interval of ${interval} ${unit} would draw ${Math.floor((max - min) / interval)} levels; it was widened to ${wider.toPrecision(3)} ${unit}.`);
+    interval = wider;
+  }
   const thresholds: number[] = [];
   for (let v = Math.ceil(min / interval) * interval; v <= max; v += interval) thresholds.push(v);
   const grid2 = cellValues.map((v) => (v === null ? NaN : v));
@@ -162,7 +186,7 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
       .filter((b) => b.coordinates.length > 0)
       .map((b) => ({
         type: 'Feature',
-        properties: { value: b.value, label: `${Math.round(b.value)} m` },
+        properties: { value: b.value, label: `${Number(b.value.toPrecision(6))} ${unit}` },
         geometry: { type: 'MultiPolygon', coordinates: b.coordinates.map((poly) => poly.map((ring) => ring.map(toLonLat))) },
       })),
   };
@@ -201,6 +225,7 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
           lat: p.lat,
           value: p.value,
           interpretationVersion: p.interpretationVersion,
+          ...(p.atDepth ? { atDepth: p.atDepth } : {}),
           residual: byIndex.get(index)?.residual ?? null,
           predicted: byIndex.get(index)?.predicted ?? null,
         })),

@@ -45,13 +45,13 @@ export function surfacesRouter(db: Db): Router {
   r.get('/:teamId/surfaces/:surfaceId/value', requireTeam('team.read'), async (req, res) => {
     const s = await getSurface(db, teamIdOf(req), parse(surfaceParams, req.params).surfaceId);
     const { lon, lat } = parse(pointQuery, req.query);
-    res.json({ lon, lat, unit: 'm', ...(valueAt(s.grid, lon, lat) ?? { value: null, stdDev: null }) });
+    res.json({ lon, lat, unit: s.unit, ...(valueAt(s.grid, lon, lat) ?? { value: null, stdDev: null }) });
   });
   r.get('/:teamId/surfaces/:surfaceId/planned-wells/:plannedWellId/value', requireTeam('team.read'), async (req, res) => {
     const s = await getSurface(db, teamIdOf(req), parse(surfaceParams, req.params).surfaceId);
     const pw = await getPlannedWell(db, teamIdOf(req), parse(z.object({ plannedWellId: z.string().uuid() }), req.params).plannedWellId);
     const [lon, lat] = pw.location.coordinates;
-    res.json({ plannedWellId: pw.id, lon, lat, unit: 'm', ...(valueAt(s.grid, lon, lat) ?? { value: null, stdDev: null }) });
+    res.json({ plannedWellId: pw.id, lon, lat, unit: s.unit, ...(valueAt(s.grid, lon, lat) ?? { value: null, stdDev: null }) });
   });
   r.delete('/:teamId/surfaces/:surfaceId', requireTeam('surfaces.run'), async (req, res) => {
     await deleteSurface(db, teamIdOf(req), parse(surfaceParams, req.params).surfaceId);

@@ -1,85 +1,111 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { z } from 'zod';
-import { SURFACE_QUANTITY_LABELS, type Surface, type SurfaceSummary, surfaceRequestBody } from '../../../shared/schemas/surfaces';
+import { AT_DEPTH_QUANTITIES, SURFACE_QUANTITY_LABELS, surfaceRequestBody, surfaceSiUnit, type Surface, type SurfaceExcludedWell, type SurfaceQuantity, type SurfaceSummary } from '../../../shared/schemas/surfaces';
 import type { Db } from '../../db/client';
 import { surfaces, users } from '../../db/schema';
 import { badRequest, notFound } from '../../lib/httpError';
 import type { Progress } from '../../lib/jobs';
 import { getPlannedWell } from '../planning/plannedWells.service';
 import { getProspect } from '../prospects/prospects.service';
+import { profileWellOf, valuesAtDepth, type WellRow } from './atDepth.service';
 import type { SurfaceInputPoint } from './computeSurface';
 import { runSurfaceInWorker } from './runInWorker';
 
 type Params = z.output<typeof surfaceRequestBody>;
 
-type Candidate = {
-  id: string;
-  name: string;
-  lon: number;
-  lat: number;
-  top_tvd_m: number | null;
-  datum_elevation_m: number;
-  water_depth_m: number | null;
-  version: number | null;
-};
+type Candidate = WellRow & { top_tvd_m: number | null };
 
-/** Each well with its newest accepted interpretation's TOP (if any). */
+/** Each well with its newest accepted interpretation (its TOP, if any, and the whole content for profiles). */
 const withTop = (where: ReturnType<typeof sql>) => sql`
   SELECT w.id, w.name, ST_X(w.location) AS lon, ST_Y(w.location) AS lat, w.datum_elevation_m, w.water_depth_m,
-    i.version, (i.content->'top'->>'tvdM')::float8 AS top_tvd_m
+    w.air_gap_m, w.ground_elevation_m, w.offshore, i.version, i.content, (i.content->'top'->>'tvdM')::float8 AS top_tvd_m
   FROM wells w
   LEFT JOIN LATERAL (SELECT version, content FROM interpretations WHERE well_id = w.id AND status = 'accepted' ORDER BY version DESC LIMIT 1) i ON true
   WHERE ${where}
   ORDER BY w.name`;
 
-async function gatherPoints(db: Db, teamId: string, prospectId: string, params: Params) {
-  const warnings: string[] = [];
-  let rows: Candidate[];
+const listNames = (wells: { name: string }[]) => `${wells.slice(0, 10).map((w) => w.name).join(', ')}${wells.length > 10 ? ', …' : ''}`;
+
+async function candidates(db: Db, teamId: string, prospectId: string, params: Params): Promise<Candidate[]> {
   const src = params.wells;
   if (src.from === 'prospect') {
-    rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND ST_DWithin(w.location::geography, (SELECT outline FROM prospects WHERE id = ${prospectId})::geography, ${src.bufferKm * 1000})`))).rows;
+    const rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND ST_DWithin(w.location::geography, (SELECT outline FROM prospects WHERE id = ${prospectId})::geography, ${src.bufferKm * 1000})`))).rows;
     if (rows.length === 0) throw badRequest('no_wells', `No wells lie within ${src.bufferKm} km of this prospect; widen the buffer or list the wells.`);
-  } else if (src.from === 'offset-set') {
-    await getPlannedWell(db, teamId, src.plannedWellId);
-    rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND w.id IN (SELECT well_id FROM offset_picks WHERE planned_well_id = ${src.plannedWellId})`))).rows;
-    if (rows.length === 0) throw badRequest('no_wells', 'That planned well has no offset wells picked yet.');
-  } else {
-    rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND w.id IN (${sql.join(src.wellIds.map((i) => sql`${i}::uuid`), sql`, `)})`))).rows;
-    if (rows.length < src.wellIds.length) throw badRequest('validation_failed', `${src.wellIds.length - rows.length} of the listed wells are not wells of this team.`);
+    return rows;
   }
+  if (src.from === 'offset-set') {
+    await getPlannedWell(db, teamId, src.plannedWellId);
+    const rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND w.id IN (SELECT well_id FROM offset_picks WHERE planned_well_id = ${src.plannedWellId})`))).rows;
+    if (rows.length === 0) throw badRequest('no_wells', 'That planned well has no offset wells picked yet.');
+    return rows;
+  }
+  const rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND w.id IN (${sql.join(src.wellIds.map((i) => sql`${i}::uuid`), sql`, `)})`))).rows;
+  if (rows.length < src.wellIds.length) throw badRequest('validation_failed', `${src.wellIds.length - rows.length} of the listed wells are not wells of this team.`);
+  return rows;
+}
+
+/** TOP depths below sea level, or below the mudline (offshore) or the ground (onshore). */
+function topPoints(rows: Candidate[], params: Params) {
   const points: SurfaceInputPoint[] = [];
-  const noTop: string[] = [];
-  const noWater: string[] = [];
+  const excluded: SurfaceExcludedWell[] = [];
   for (const r of rows) {
     if (r.top_tvd_m === null) {
-      noTop.push(r.name);
+      excluded.push({ wellId: r.id, name: r.name, reason: 'no accepted TOP pick' });
       continue;
     }
     const tvdss = Number(r.top_tvd_m) - Number(r.datum_elevation_m);
-    if (params.quantity === 'top_below_mudline' && r.water_depth_m === null) {
-      noWater.push(r.name);
-      continue;
+    let value = tvdss;
+    if (params.quantity === 'top_below_mudline') {
+      if (r.water_depth_m !== null) value = tvdss - Number(r.water_depth_m);
+      else if (r.offshore) {
+        excluded.push({ wellId: r.id, name: r.name, reason: 'offshore well without a water depth' });
+        continue;
+      } else {
+        // On land the "mudline" is the ground: TOP TVD below the rig datum less the rig's height above the ground.
+        value = Number(r.top_tvd_m) - profileWellOf(r).airGapM;
+      }
     }
-    const value = params.quantity === 'top_tvdss' ? tvdss : tvdss - Number(r.water_depth_m);
     points.push({ wellId: r.id, name: r.name, lon: Number(r.lon), lat: Number(r.lat), value, interpretationVersion: r.version });
   }
-  if (noTop.length) warnings.push(`${noTop.length} well(s) have no accepted TOP pick and were left out: ${noTop.slice(0, 10).join(', ')}${noTop.length > 10 ? ', …' : ''}.`);
-  if (noWater.length) warnings.push(`${noWater.length} well(s) have no water depth and were left out: ${noWater.slice(0, 10).join(', ')}.`);
+  const noTop = excluded.filter((e) => e.reason === 'no accepted TOP pick');
+  const noWater = excluded.filter((e) => e.reason !== 'no accepted TOP pick');
+  const warnings: string[] = [];
+  if (noTop.length) warnings.push(`${noTop.length} well(s) have no accepted TOP pick and were left out: ${listNames(noTop)}.`);
+  if (noWater.length) warnings.push(`${noWater.length} offshore well(s) have no water depth and were left out: ${listNames(noWater)}.`);
   if (points.length < 3) {
-    throw badRequest('too_few_wells', `A surface needs at least 3 wells with an accepted TOP pick; ${points.length} of the ${rows.length} wells found have one.`, { warnings });
+    throw badRequest('too_few_wells', `A surface needs at least 3 wells with an accepted TOP pick; ${points.length} of the ${rows.length} wells found have one.`, { warnings, excluded });
   }
-  return { points, warnings };
+  return { points, excluded, warnings };
+}
+
+async function atDepthPoints(db: Db, rows: Candidate[], params: Params, progress: Progress) {
+  const depth = params.depthTvdssM!;
+  const { points, excluded, reach } = await valuesAtDepth(db, rows, params.quantity, depth, progress);
+  if (points.length === 0 && reach && reach.baseTvdssM < depth) {
+    throw badRequest(
+      'depth_beyond_logs',
+      `depthTvdssM: no well's pore-pressure curve reaches ${depth} m TVDSS (the deepest ends at ${Math.round(reach.baseTvdssM)} m TVDSS in ${reach.name}); choose a shallower depth.`,
+      { excluded },
+    );
+  }
+  const warnings = excluded.length ? [`${excluded.length} of the ${rows.length} wells have no pore pressure at ${depth} m TVDSS and were left out (see the list of wells left out).`] : [];
+  if (points.length < 3) {
+    throw badRequest('too_few_wells', `A surface needs at least 3 wells with a pore pressure at ${depth} m TVDSS; ${points.length} of the ${rows.length} wells found have one.`, { warnings, excluded });
+  }
+  return { points, excluded, warnings };
 }
 
 /** Gathers the wells, computes off the main thread, and stores the run. */
 export async function createSurface(db: Db, teamId: string, userId: string, prospectId: string, params: Params, progress: Progress = () => {}): Promise<Surface> {
   const prospect = await getProspect(db, teamId, prospectId);
   progress('gathering wells', 0, 1);
-  const { points, warnings } = await gatherPoints(db, teamId, prospectId, params);
+  const rows = await candidates(db, teamId, prospectId, params);
+  const { points, excluded, warnings } = AT_DEPTH_QUANTITIES.includes(params.quantity) ? await atDepthPoints(db, rows, params, progress) : topPoints(rows, params);
   const result = await runSurfaceInWorker({ points, outline: prospect.geometry, params }, progress);
   progress('saving', 0, 1);
   const method = params.method.kind === 'kriging' ? `ordinary kriging (${result.variogram?.model.model})` : `inverse distance (power ${params.method.power})`;
-  const name = params.name ?? `${SURFACE_QUANTITY_LABELS[params.quantity]} — ${method}`;
+  const at = params.depthTvdssM !== undefined && AT_DEPTH_QUANTITIES.includes(params.quantity) ? ` at ${params.depthTvdssM} m TVDSS` : '';
+  const name = params.name ?? `${SURFACE_QUANTITY_LABELS[params.quantity]}${at} — ${method}`;
   const { grid, ...rest } = result;
   const [row] = await db
     .insert(surfaces)
@@ -99,7 +125,7 @@ export async function createSurface(db: Db, teamId: string, userId: string, pros
       values: grid.values as number[],
       stdDev: grid.stdDev as number[] | null,
       extent: sql`ST_SetSRID(ST_GeomFromGeoJSON(${JSON.stringify(result.extent)}), 4326)` as unknown as string,
-      result: { ...rest, warnings: [...warnings, ...rest.warnings], cornersLonLat: grid.cornersLonLat, min: grid.min, max: grid.max },
+      result: { ...rest, excluded, warnings: [...warnings, ...rest.warnings], cornersLonLat: grid.cornersLonLat, min: grid.min, max: grid.max },
       rmseM: result.crossValidation.rmse,
       wellCount: result.wells.length,
       createdBy: userId,
@@ -117,37 +143,67 @@ const summaryColumns = {
   cellSizeM: surfaces.cellSizeM,
   wellCount: surfaces.wellCount,
   rmseM: surfaces.rmseM,
+  params: surfaces.params,
   createdBy: surfaces.createdBy,
   createdByName: users.name,
   createdAt: surfaces.createdAt,
 };
 
+/** The summary fields of a stored row: the unit follows the quantity; `rmseM` only where the unit is metres. */
+type SummaryRow = {
+  id: string;
+  prospectId: string;
+  name: string;
+  quantity: string;
+  method: string;
+  cellSizeM: number;
+  wellCount: number;
+  rmseM: number | null;
+  params: Record<string, unknown>;
+  createdBy: string | null;
+  createdByName: string | null;
+  createdAt: Date;
+};
+
+function summaryOf(r: SummaryRow): SurfaceSummary {
+  const quantity = r.quantity as SurfaceQuantity;
+  const unit = surfaceSiUnit(quantity);
+  const depth = (r.params as { depthTvdssM?: number }).depthTvdssM;
+  return {
+    id: r.id,
+    prospectId: r.prospectId,
+    name: r.name,
+    quantity,
+    method: r.method,
+    cellSizeM: r.cellSizeM,
+    wellCount: r.wellCount,
+    unit,
+    depthTvdssM: AT_DEPTH_QUANTITIES.includes(quantity) ? (depth ?? null) : null,
+    // The rmse_m column holds the RMSE in the quantity's unit; it is only named metres where it is metres.
+    rmse: r.rmseM,
+    rmseM: unit === 'm' ? r.rmseM : null,
+    createdBy: r.createdBy,
+    createdByName: r.createdByName,
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
 export async function listSurfaces(db: Db, teamId: string, prospectId: string): Promise<SurfaceSummary[]> {
   await getProspect(db, teamId, prospectId);
   const rows = await db.select(summaryColumns).from(surfaces).leftJoin(users, eq(users.id, surfaces.createdBy)).where(and(eq(surfaces.teamId, teamId), eq(surfaces.prospectId, prospectId))).orderBy(desc(surfaces.createdAt));
-  return rows.map((r) => ({ ...r, quantity: r.quantity as SurfaceSummary['quantity'], createdAt: r.createdAt.toISOString() }));
+  return rows.map(summaryOf);
 }
 
 export async function getSurface(db: Db, teamId: string, id: string): Promise<Surface> {
   const [row] = await db
-    .select({ ...summaryColumns, params: surfaces.params, nx: surfaces.nx, ny: surfaces.ny, projection: surfaces.projection, x0: surfaces.x0, y0: surfaces.y0, values: surfaces.values, stdDev: surfaces.stdDev, result: surfaces.result })
+    .select({ ...summaryColumns, nx: surfaces.nx, ny: surfaces.ny, projection: surfaces.projection, x0: surfaces.x0, y0: surfaces.y0, values: surfaces.values, stdDev: surfaces.stdDev, result: surfaces.result })
     .from(surfaces)
     .leftJoin(users, eq(users.id, surfaces.createdBy))
     .where(and(eq(surfaces.teamId, teamId), eq(surfaces.id, id)));
   if (!row) throw notFound('That surface');
   const r = row.result as unknown as Omit<Surface, 'grid'> & { cornersLonLat: [number, number][]; min: number; max: number };
   return {
-    id: row.id,
-    prospectId: row.prospectId,
-    name: row.name,
-    quantity: row.quantity as Surface['quantity'],
-    method: row.method,
-    cellSizeM: row.cellSizeM,
-    wellCount: row.wellCount,
-    rmseM: row.rmseM,
-    createdBy: row.createdBy,
-    createdByName: row.createdByName,
-    createdAt: row.createdAt.toISOString(),
+    ...summaryOf(row),
     params: row.params,
     grid: { nx: row.nx, ny: row.ny, cellSizeM: row.cellSizeM, projection: row.projection, x0: row.x0, y0: row.y0, values: row.values, stdDev: row.stdDev, cornersLonLat: r.cornersLonLat, min: r.min, max: r.max },
     contours: r.contours,
@@ -155,6 +211,7 @@ export async function getSurface(db: Db, teamId: string, id: string): Promise<Su
     variogram: r.variogram,
     crossValidation: r.crossValidation,
     wells: r.wells,
+    excluded: r.excluded ?? [],
     warnings: r.warnings,
   };
 }

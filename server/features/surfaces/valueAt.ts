@@ -11,13 +11,17 @@ export function valueAt(grid: Surface['grid'], lon: number, lat: number): { valu
   const fi = (x - grid.x0) / grid.cellSizeM;
   const fj = (y - grid.y0) / grid.cellSizeM;
   if (fi < 0 || fj < 0 || fi > grid.nx - 1 || fj > grid.ny - 1) return null;
-  const i = Math.min(Math.floor(fi), grid.nx - 2);
-  const j = Math.min(Math.floor(fj), grid.ny - 2);
-  const tx = fi - i;
-  const ty = fj - j;
+  // A grid one cell wide (or tall) has no second column (row) to blend with: index −1 and a read past the row
+  // would follow. Clamp to the one column and take it whole, as the client's bilinearAtCell does.
+  const i = Math.max(0, Math.min(Math.floor(fi), grid.nx - 2));
+  const j = Math.max(0, Math.min(Math.floor(fj), grid.ny - 2));
+  const i1 = Math.min(i + 1, grid.nx - 1);
+  const j1 = Math.min(j + 1, grid.ny - 1);
+  const tx = grid.nx === 1 ? 0 : fi - i;
+  const ty = grid.ny === 1 ? 0 : fj - j;
   const blend = (a: (number | null)[]) => {
-    const c = [a[j * grid.nx + i], a[j * grid.nx + i + 1], a[(j + 1) * grid.nx + i], a[(j + 1) * grid.nx + i + 1]];
-    if (c.some((v) => v === null)) return null;
+    const c = [a[j * grid.nx + i], a[j * grid.nx + i1], a[j1 * grid.nx + i], a[j1 * grid.nx + i1]];
+    if (c.some((v) => v === null || v === undefined)) return null;
     const [v00, v10, v01, v11] = c as number[];
     return (1 - ty) * ((1 - tx) * v00 + tx * v10) + ty * ((1 - tx) * v01 + tx * v11);
   };
