@@ -1,9 +1,9 @@
 import supertest from 'supertest';
-import { SignJWT } from 'jose';
+import { SignJWT, decodeJwt } from 'jose';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../../server/db/seed/demoAccounts';
 import { SESSION_COOKIE } from '../../server/features/auth/sessionToken';
-import { signedInAgent, startTestApp, type TestContext } from './support/testApp';
+import { freshTeamAgent, linkToken, signedInAgent, startTestApp, waitForMail, type TestContext } from './support/testApp';
 
 let ctx: TestContext;
 beforeAll(async () => {
@@ -15,6 +15,15 @@ function sessionCookie(res: supertest.Response): string | undefined {
   const raw = res.headers['set-cookie'] as unknown as string[] | undefined;
   return raw?.find((c) => c.startsWith(`${SESSION_COOKIE}=`));
 }
+
+/** The `name=value` part of the session cookie a response set, as a browser would send it back. */
+function cookiePair(res: supertest.Response): string {
+  const c = sessionCookie(res);
+  if (!c) throw new Error(`no session cookie in the reply (${res.status})`);
+  return c.split(';')[0];
+}
+
+const me = (cookie: string) => supertest(ctx.app).get('/api/auth/me').set('Cookie', cookie);
 
 describe('sign-in', () => {
   it('signs the planner in with an httpOnly, SameSite=Lax cookie and returns memberships', async () => {
@@ -115,9 +124,11 @@ describe('session', () => {
   it('renews a session past half its life without the user noticing', async () => {
     const signIn = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: 'viewer@porelith.example', password: DEMO_PASSWORD });
     const now = Math.floor(Date.now() / 1000);
-    const old = await new SignJWT({})
+    const { jti, sv } = decodeJwt(cookiePair(signIn).split('=')[1]);
+    const old = await new SignJWT({ sv })
       .setProtectedHeader({ alg: 'HS256' })
       .setSubject(signIn.body.user.id)
+      .setJti(jti!)
       .setIssuer('porelith')
       .setIssuedAt(now - 20 * 60)
       .setExpirationTime(now + 10 * 60)
@@ -127,5 +138,55 @@ describe('session', () => {
     const renewed = sessionCookie(res);
     expect(renewed).toBeDefined();
     expect(renewed).not.toContain(old);
+  });
+});
+
+describe('ending sessions on the server', () => {
+  it('refuses a cookie captured before sign-out, and its silently renewed successor, after it', async () => {
+    const first = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: 'viewer@porelith.example', password: DEMO_PASSWORD });
+    const captured = cookiePair(first);
+    const other = cookiePair(await supertest(ctx.app).post('/api/auth/sign-in').send({ email: 'viewer@porelith.example', password: DEMO_PASSWORD }));
+    // A renewed token of the same session, as the browser would hold it past half the lifetime.
+    const { jti, sv } = decodeJwt(captured.split('=')[1]);
+    const now = Math.floor(Date.now() / 1000);
+    const renewed = await new SignJWT({ sv })
+      .setProtectedHeader({ alg: 'HS256' })
+      .setSubject(first.body.user.id)
+      .setJti(jti!)
+      .setIssuer('porelith')
+      .setIssuedAt(now)
+      .setExpirationTime(now + 30 * 60)
+      .sign(new TextEncoder().encode(ctx.env.JWT_SECRET));
+    expect((await me(captured)).status).toBe(200);
+
+    const out = await supertest(ctx.app).post('/api/auth/sign-out').set('Cookie', captured);
+    expect(out.status).toBe(204);
+
+    const replay = await me(captured);
+    expect(replay.status).toBe(401);
+    expect(replay.body.error.code).toBe('unauthenticated');
+    expect(sessionCookie(replay)).toMatch(/Expires=Thu, 01 Jan 1970/);
+    expect((await me(`${SESSION_COOKIE}=${renewed}`)).status).toBe(401);
+    // Only that session ended: the same user's session elsewhere goes on.
+    expect((await me(other)).status).toBe(200);
+  });
+
+  it('a password reset ends every earlier session of that user; the session it starts works', async () => {
+    const user = await freshTeamAgent(ctx, 'Reset sessions team', 'viewer');
+    const before = cookiePair(await supertest(ctx.app).post('/api/auth/sign-in').send({ email: user.email, password: user.password }));
+    expect((await me(before)).status).toBe(200);
+
+    const since = new Date(Date.now() - 1000);
+    await supertest(ctx.app).post('/api/auth/reset-request').send({ email: user.email });
+    const mail = await waitForMail(ctx.db, user.email, since);
+    const reset = await supertest(ctx.app).post('/api/auth/reset').send({ token: linkToken(mail.textBody, '/reset-password'), password: 'after-reset-password' });
+    expect(reset.status).toBe(200);
+
+    expect((await me(before)).status).toBe(401);
+    expect((await user.agent.get('/api/auth/me')).status).toBe(401);
+    expect((await user.agent.get(`/api/teams/${user.teamId}/members`)).status).toBe(401);
+    const fresh = await me(cookiePair(reset));
+    expect(fresh.status).toBe(200);
+    expect(fresh.body.user.email).toBe(user.email);
   });
 });

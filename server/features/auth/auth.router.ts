@@ -5,9 +5,9 @@ import type { Db } from '../../db/client';
 import type { Env } from '../../env';
 import { unauthenticated } from '../../lib/httpError';
 import { parse } from '../../lib/parse';
-import { clearSessionCookie, issueSessionCookie } from '../../middleware/session';
+import { endRequestSession, issueSessionCookie } from '../../middleware/session';
 import type { Mailer } from '../mail/mailer';
-import { acceptInvitation, loadSession, requestPasswordReset, resetPassword, signIn } from './auth.service';
+import { acceptInvitation, loadSession, requestPasswordReset, resetPassword, signIn, startSession } from './auth.service';
 
 function limiter(env: Env, what: string): RequestHandler {
   return rateLimit({
@@ -32,11 +32,11 @@ export function authRouter(db: Db, env: Env, mailer: Mailer): Router {
   r.post('/sign-in', signInLimit, async (req, res) => {
     const { email, password } = parse(signInBody, req.body);
     const session = await signIn(db, email, password);
-    await issueSessionCookie(res, env, session.user.id);
+    await issueSessionCookie(res, env, await startSession(db, session.user.id));
     res.json(session);
   });
-  r.post('/sign-out', (_req, res) => {
-    clearSessionCookie(res, env);
+  r.post('/sign-out', async (req, res) => {
+    await endRequestSession(req, res, db, env);
     res.status(204).end();
   });
   r.get('/me', (req, res) => {
@@ -51,13 +51,13 @@ export function authRouter(db: Db, env: Env, mailer: Mailer): Router {
   r.post('/reset', linkLimit, async (req, res) => {
     const { token, password } = parse(acceptTokenBody, req.body);
     const userId = await resetPassword(db, token, password);
-    await issueSessionCookie(res, env, userId);
+    await issueSessionCookie(res, env, await startSession(db, userId));
     res.json(await loadSession(db, userId));
   });
   r.post('/accept-invite', linkLimit, async (req, res) => {
     const { token, password } = parse(acceptTokenBody, req.body);
     const userId = await acceptInvitation(db, token, password);
-    await issueSessionCookie(res, env, userId);
+    await issueSessionCookie(res, env, await startSession(db, userId));
     res.json(await loadSession(db, userId));
   });
   return r;

@@ -1,12 +1,14 @@
 import bcrypt from 'bcryptjs';
-import { and, eq, gt, isNull, sql } from 'drizzle-orm';
+import { randomUUID } from 'node:crypto';
+import { and, eq, gt, isNull, lt, sql } from 'drizzle-orm';
 import type { Session } from '../../../shared/schemas/auth';
 import type { Db } from '../../db/client';
-import { invitations, memberships, passwordResets, teams, users } from '../../db/schema';
+import { invitations, memberships, passwordResets, revokedSessions, teams, users } from '../../db/schema';
 import { HttpError, badRequest, conflict } from '../../lib/httpError';
 import type { Mailer } from '../mail/mailer';
 import { INVITE_DAYS } from '../teams/teams.service';
 import { hashLinkToken, newLinkToken } from './linkTokens';
+import type { SessionClaims, SessionGrant } from './sessionToken';
 
 const RESET_MINUTES = 60;
 const BCRYPT_ROUNDS = 10;
@@ -45,6 +47,43 @@ export async function loadSession(db: Db, userId: string): Promise<Session | nul
   return { user, memberships: rows };
 }
 
+/** A new session for the user at their current session version (what the cookie will carry). */
+export async function startSession(db: Db, userId: string): Promise<SessionGrant> {
+  const [row] = await db.select({ version: users.sessionVersion }).from(users).where(eq(users.id, userId));
+  if (!row) throw invalidCredentials();
+  return { userId, sessionId: randomUUID(), sessionVersion: row.version };
+}
+
+/**
+ * The session a verified token stands for, or null when it was ended: signed out (its id is revoked),
+ * or issued before the user's last password reset (an older version), or the user is gone.
+ */
+export async function loadActiveSession(db: Db, claims: SessionClaims): Promise<Session | null> {
+  const [state] = await db
+    .select({
+      version: users.sessionVersion,
+      revoked: sql<boolean>`exists (select 1 from ${revokedSessions} where ${revokedSessions.sessionId} = ${claims.sessionId})`,
+    })
+    .from(users)
+    .where(eq(users.id, claims.userId));
+  if (!state || state.revoked || state.version !== claims.sessionVersion) return null;
+  return loadSession(db, claims.userId);
+}
+
+/**
+ * Ends one session (sign-out). The row must outlive every token that may carry this id: renewal keeps the
+ * id, and no token issued up to now lives past now + `sessionMinutes`. Expired rows are pruned on the way.
+ */
+export async function endSession(db: Db, claims: SessionClaims, sessionMinutes: number): Promise<void> {
+  await db.transaction(async (tx) => {
+    await tx.delete(revokedSessions).where(lt(revokedSessions.expiresAt, sql`now()`));
+    await tx
+      .insert(revokedSessions)
+      .values({ sessionId: claims.sessionId, userId: claims.userId, expiresAt: sql`now() + make_interval(mins => ${sessionMinutes})` })
+      .onConflictDoNothing();
+  });
+}
+
 export async function signIn(db: Db, email: string, password: string): Promise<Session> {
   const [user] = await db.select({ id: users.id, hash: users.passwordHash }).from(users).where(eq(users.email, email));
   const ok = await bcrypt.compare(password, user?.hash ?? DUMMY_HASH);
@@ -74,17 +113,26 @@ export async function requestPasswordReset(db: Db, mailer: Mailer, appUrl: strin
   });
 }
 
-/** Consumes a reset token (once, atomically) and sets the new password. */
+/** Consumes a reset token (once, atomically), sets the new password and ends every earlier session. */
 export async function resetPassword(db: Db, token: string, password: string): Promise<string> {
+  const tokenHash = hashLinkToken(token);
+  const [reset] = await db.select().from(passwordResets).where(eq(passwordResets.tokenHash, tokenHash));
+  if (!reset || reset.usedAt) throw invalidToken();
+  if (reset.expiresAt.getTime() <= Date.now()) throw expiredReset();
   const hash = await bcrypt.hash(password, BCRYPT_ROUNDS);
   return db.transaction(async (tx) => {
+    // Re-checked here so two tabs using the same link cannot both succeed.
     const [used] = await tx
       .update(passwordResets)
       .set({ usedAt: sql`now()` })
-      .where(and(eq(passwordResets.tokenHash, hashLinkToken(token)), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, sql`now()`)))
+      .where(and(eq(passwordResets.id, reset.id), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, sql`now()`)))
       .returning({ userId: passwordResets.userId });
     if (!used) throw invalidToken();
-    await tx.update(users).set({ passwordHash: hash }).where(eq(users.id, used.userId));
+    // Whoever knew the old password may hold a session; the version bump ends them all.
+    await tx
+      .update(users)
+      .set({ passwordHash: hash, sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(eq(users.id, used.userId));
     return used.userId;
   });
 }

@@ -2,8 +2,16 @@ import { SignJWT, jwtVerify, errors } from 'jose';
 
 export const SESSION_COOKIE = 'porelith_session';
 
-export interface SessionClaims {
+/** What a session token stands for: one sign-in (`sessionId`) of a user at one `sessionVersion`. */
+export interface SessionGrant {
   userId: string;
+  /** Survives silent renewal, so signing out ends the renewed tokens too. */
+  sessionId: string;
+  /** Must equal the user's current version; a password reset bumps it. */
+  sessionVersion: number;
+}
+
+export interface SessionClaims extends SessionGrant {
   issuedAt: number; // seconds since epoch
   expiresAt: number;
 }
@@ -12,20 +20,24 @@ const encoder = new TextEncoder();
 
 /**
  * Signs a short-lived HS256 session token.
- * @example await signSession('user-uuid', secret, 30) // 'eyJhbGciOiJIUzI1NiJ9…'
+ * @example await signSession({ userId: 'user-uuid', sessionId: 'sid-uuid', sessionVersion: 0 }, secret, 30) // 'eyJhbGciOiJIUzI1NiJ9…'
  */
-export async function signSession(userId: string, secret: string, minutes: number, now = Date.now()): Promise<string> {
+export async function signSession(grant: SessionGrant, secret: string, minutes: number, now = Date.now()): Promise<string> {
   const iat = Math.floor(now / 1000);
-  return new SignJWT({})
+  return new SignJWT({ sv: grant.sessionVersion })
     .setProtectedHeader({ alg: 'HS256' })
-    .setSubject(userId)
+    .setSubject(grant.userId)
+    .setJti(grant.sessionId)
     .setIssuedAt(iat)
     .setExpirationTime(iat + minutes * 60)
     .setIssuer('porelith')
     .sign(encoder.encode(secret));
 }
 
-/** Verifies signature, algorithm, issuer and expiry; returns null for any invalid token (never throws). */
+/**
+ * Verifies signature, algorithm, issuer and expiry; returns null for any invalid token (never throws).
+ * Tokens without a session id or version (signed before sessions could be ended) are refused too.
+ */
 export async function verifySession(token: string, secret: string, now = Date.now()): Promise<SessionClaims | null> {
   try {
     const { payload } = await jwtVerify(token, encoder.encode(secret), {
@@ -33,8 +45,9 @@ export async function verifySession(token: string, secret: string, now = Date.no
       issuer: 'porelith',
       currentDate: new Date(now),
     });
-    if (typeof payload.sub !== 'string' || payload.iat === undefined || payload.exp === undefined) return null;
-    return { userId: payload.sub, issuedAt: payload.iat, expiresAt: payload.exp };
+    const { sub, jti, sv, iat, exp } = payload;
+    if (typeof sub !== 'string' || typeof jti !== 'string' || !Number.isInteger(sv) || iat === undefined || exp === undefined) return null;
+    return { userId: sub, sessionId: jti, sessionVersion: sv as number, issuedAt: iat, expiresAt: exp };
   } catch (err) {
     if (err instanceof errors.JOSEError) return null;
     throw err;
