@@ -1,7 +1,7 @@
 import supertest from 'supertest';
 import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { invitations, memberships, users } from '../../server/db/schema';
+import { invitations, memberships, passwordResets, users } from '../../server/db/schema';
 import { freshTeamAgent, linkToken, signedInAgent, startTestApp, waitForMail, type TestContext } from './support/testApp';
 
 let ctx: TestContext;
@@ -155,5 +155,49 @@ describe('password reset', () => {
     await expect(waitForMail(ctx.db, email, new Date(Date.now() - 1000), 500)).rejects.toThrow(/no mail/);
     const [u] = await ctx.db.select().from(users).where(eq(users.email, email));
     expect(u).toBeUndefined();
+  });
+});
+
+describe('expired links', () => {
+  const anHourAgo = () => new Date(Date.now() - 3600_000);
+
+  it('refuses an expired invitation link with a clear message and writes nothing', async () => {
+    const email = `late-invitee-${Date.now()}@porelith.example`;
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const since = new Date(Date.now() - 1000);
+    const inv = await admin.post(`/api/teams/${ctx.demoTeamId}/invitations`).send({ email, name: 'Late Comer', role: 'viewer' });
+    const token = linkToken((await waitForMail(ctx.db, email, since)).textBody, '/accept-invite');
+    await ctx.db.update(invitations).set({ expiresAt: anHourAgo() }).where(eq(invitations.id, inv.body.id));
+
+    const res = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token, password: 'too-late-password' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('invalid_token');
+    expect(res.body.error.message).toBe('This invitation link has expired (links last 7 days); ask your team admin to invite you again.');
+    expect(res.headers['set-cookie']).toBeUndefined();
+    const [row] = await ctx.db.select().from(invitations).where(eq(invitations.id, inv.body.id));
+    expect(row.acceptedAt).toBeNull();
+    expect(await ctx.db.select().from(users).where(eq(users.email, email))).toEqual([]);
+  });
+
+  it('refuses an expired reset link with a clear message and writes nothing', async () => {
+    const user = await freshTeamAgent(ctx, 'Expired reset team', 'viewer');
+    const since = new Date(Date.now() - 1000);
+    await supertest(ctx.app).post('/api/auth/reset-request').send({ email: user.email });
+    const token = linkToken((await waitForMail(ctx.db, user.email, since)).textBody, '/reset-password');
+    await ctx.db.update(passwordResets).set({ expiresAt: anHourAgo() }).where(eq(passwordResets.userId, user.userId));
+    const [before] = await ctx.db.select().from(users).where(eq(users.id, user.userId));
+
+    const res = await supertest(ctx.app).post('/api/auth/reset').send({ token, password: 'too-late-password' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('invalid_token');
+    expect(res.body.error.message).toBe('This password-reset link has expired (links last 60 minutes); ask for a new one from the sign-in page.');
+    expect(res.headers['set-cookie']).toBeUndefined();
+    const [after] = await ctx.db.select().from(users).where(eq(users.id, user.userId));
+    expect(after).toEqual(before);
+    const [link] = await ctx.db.select().from(passwordResets).where(eq(passwordResets.userId, user.userId));
+    expect(link.usedAt).toBeNull();
+    // The old password still works and the session from before is still alive.
+    expect((await supertest(ctx.app).post('/api/auth/sign-in').send({ email: user.email, password: user.password })).status).toBe(200);
+    expect((await user.agent.get('/api/auth/me')).status).toBe(200);
   });
 });
