@@ -22,9 +22,15 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Porelith <no-reply@porelith.example>'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   PORELITH_DIST: z.string().default('dist'),
+  // Demo accounts carry a published password, so a production install must ask for them explicitly.
+  PORELITH_DEMO: z.enum(['0', '1'], { error: 'must be 0 or 1' }).optional(),
 });
 
-export type Env = z.infer<typeof envSchema> & { APP_URL: string };
+export type Env = Omit<z.infer<typeof envSchema>, 'PORELITH_DEMO'> & {
+  APP_URL: string;
+  /** Seed (and keep re-creating) the demo team and accounts at set-up: PORELITH_DEMO, else on outside production. */
+  PORELITH_DEMO: boolean;
+};
 
 /**
  * Parses the environment; throws with every invalid field named.
@@ -37,7 +43,11 @@ export function parseEnv(source: Record<string, string | undefined>): Env {
     throw new Error(`Invalid environment:\n${lines.join('\n')}`);
   }
   const env = result.data;
-  return { ...env, APP_URL: env.APP_URL ?? `http://${env.HOST}:${env.PORT}` };
+  return {
+    ...env,
+    APP_URL: env.APP_URL ?? `http://${env.HOST}:${env.PORT}`,
+    PORELITH_DEMO: env.PORELITH_DEMO === undefined ? env.NODE_ENV !== 'production' : env.PORELITH_DEMO === '1',
+  };
 }
 
 /** For entry points: parse process.env or exit with a readable message. */

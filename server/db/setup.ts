@@ -1,5 +1,7 @@
-// Entry point run by the bootstrap: migrations, then (with --demo) the idempotent demo seed:
-// the demo accounts and the synthetic demo basin in the demo team. --regenerate writes the basin anew.
+// Entry point run by the bootstrap: migrations, then (when PORELITH_DEMO is on, or with --demo) the
+// idempotent demo seed: the demo accounts and the synthetic demo basin in the demo team.
+// --regenerate writes the basin anew. With the demo off nothing demo is created, so accounts an admin
+// removed stay removed.
 import { loadEnvOrExit } from '../env';
 import { createDb } from './client';
 import { applyMigrations } from './migrate';
@@ -10,7 +12,8 @@ const env = loadEnvOrExit();
 const db = createDb(env.DATABASE_URL, 2);
 try {
   await applyMigrations(db);
-  if (process.argv.includes('--demo')) {
+  const demo = env.PORELITH_DEMO || process.argv.includes('--demo');
+  if (demo) {
     const teamId = await seedDemoAccounts(db);
     const basin = await seedDemoBasin(db, teamId, { regenerate: process.argv.includes('--regenerate') });
     console.log(
@@ -19,7 +22,7 @@ try {
         : '[porelith] synthetic demo basin already present (npm run seed:demo rewrites it)',
     );
   }
-  console.log('[porelith] database ready (migrations applied, demo accounts present)');
+  console.log(`[porelith] database ready (migrations applied${demo ? ', demo accounts present' : '; demo not seeded, PORELITH_DEMO=0'})`);
 } catch (err) {
   console.error(`[porelith] database set-up failed: ${(err as Error).message}`);
   process.exitCode = 1;

@@ -23,4 +23,13 @@ describe('environment parsing', () => {
     const env = parseEnv({ ...base, PORT: '9090', SMTP_SECURE: 'true', SMTP_PORT: '465' });
     expect(env).toMatchObject({ PORT: 9090, SMTP_SECURE: true, SMTP_PORT: 465, APP_URL: 'http://127.0.0.1:9090' });
   });
+
+  it('seeds the demo by default, but not in production unless PORELITH_DEMO=1 asks for it', () => {
+    expect(parseEnv(base).PORELITH_DEMO).toBe(true);
+    expect(parseEnv({ ...base, NODE_ENV: 'test' }).PORELITH_DEMO).toBe(true);
+    expect(parseEnv({ ...base, NODE_ENV: 'production' }).PORELITH_DEMO).toBe(false);
+    expect(parseEnv({ ...base, NODE_ENV: 'production', PORELITH_DEMO: '1' }).PORELITH_DEMO).toBe(true);
+    expect(parseEnv({ ...base, PORELITH_DEMO: '0' }).PORELITH_DEMO).toBe(false);
+    expect(() => parseEnv({ ...base, PORELITH_DEMO: 'yes' })).toThrow(/PORELITH_DEMO: must be 0 or 1/);
+  });
 });
