@@ -15,6 +15,27 @@ if (!['start', 'dev', 'test', 'seed', 'bench'].includes(mode)) fail(`Unknown mod
 
 const tsx = join(ROOT, 'node_modules', '.bin', 'tsx');
 
+// What must be undone if set-up is interrupted (Ctrl-C) or fails: stopping the private cluster and
+// removing a throwaway folder. Run last-in first-out, each at most once.
+const cleanups = [];
+function cleanUp() {
+  while (cleanups.length) {
+    try {
+      cleanups.pop()();
+    } catch (err) {
+      process.stderr.write(`[porelith] clean-up: ${err instanceof Error ? err.message : err}\n`);
+    }
+  }
+}
+// Replaced by the app's own shutdown once everything runs; until then a signal undoes the set-up.
+let onSignal = (signal) => {
+  say(`${signal} during set-up: stopping what was started.`);
+  cleanUp();
+  process.exit(130);
+};
+process.on('SIGINT', () => onSignal('SIGINT'));
+process.on('SIGTERM', () => onSignal('SIGTERM'));
+
 async function main() {
   ensureNodeModules();
   if (mode === 'test') await runTests();
@@ -26,24 +47,33 @@ async function main() {
 async function runApp() {
   const dataDir = resolve(ROOT, process.env.PORELITH_DATA ?? '.data');
   const pgPort = Number(process.env.PORELITH_PG_PORT ?? 54329);
+  // Decided before NODE_ENV gets its default below: a plain `npm start` keeps the demo accounts, an
+  // install that says NODE_ENV=production gets them only with PORELITH_DEMO=1, so removed ones stay removed.
+  const demo = process.env.PORELITH_DEMO ?? (process.env.NODE_ENV === 'production' ? '0' : '1');
+  if (demo !== '0' && demo !== '1') fail(`PORELITH_DEMO must be 0 or 1 (it is "${demo}").`);
+  // A real SMTP host replaces the local mail fake, which then is not started at all.
+  const mailFake = !process.env.SMTP_HOST;
   let cluster = null;
   let databaseUrl = process.env.DATABASE_URL;
   if (!databaseUrl) {
     ensureDebianPackages({ postgres: true });
-    cluster = await startPrivateCluster({ dir: join(dataDir, 'pg'), port: pgPort, throwaway: false });
+    const dir = join(dataDir, 'pg');
+    cleanups.push(() => stopCluster(cluster ?? { dir })); // also when interrupted while it starts
+    cluster = await startPrivateCluster({ dir, port: pgPort, throwaway: false });
     databaseUrl = cluster.databaseUrl;
   }
   const env = {
     ...process.env,
     DATABASE_URL: databaseUrl,
     JWT_SECRET: process.env.JWT_SECRET ?? readOrCreateSecret(join(dataDir, 'jwt-secret')),
-    SMTP_PORT: process.env.SMTP_PORT ?? String(Number(process.env.PORELITH_SMTP_PORT ?? pgPort + 1)),
+    ...(mailFake ? { SMTP_PORT: process.env.SMTP_PORT ?? String(Number(process.env.PORELITH_SMTP_PORT ?? pgPort + 1)) } : {}),
     NODE_ENV: process.env.NODE_ENV ?? (mode === 'dev' ? 'development' : 'production'),
+    PORELITH_DEMO: demo,
   };
-  const setupArgs = mode === 'seed' ? ['--demo', '--regenerate'] : ['--demo'];
+  const setupArgs = mode === 'seed' ? ['--demo', '--regenerate'] : [];
   await run(tsx, ['server/db/setup.ts', ...setupArgs], { env, label: 'database' });
   if (mode === 'seed') {
-    if (cluster) stopCluster(cluster);
+    cleanUp();
     return;
   }
   if (mode === 'start') await run(join(ROOT, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { env, label: 'client build' });
@@ -65,14 +95,14 @@ async function runApp() {
     stopping = true;
     for (const c of children) c.kill('SIGTERM');
     setTimeout(() => {
-      if (cluster) stopCluster(cluster);
+      cleanUp();
       process.exit(code);
     }, 800);
   };
-  process.on('SIGINT', () => shutdown(0));
-  process.on('SIGTERM', () => shutdown(0));
+  onSignal = () => shutdown(0);
 
-  launch([tsx, 'server/mail-fake.ts'], 'mail fake');
+  if (mailFake) launch([tsx, 'server/mail-fake.ts'], 'mail fake');
+  else say(`sending mail through ${process.env.SMTP_HOST}; the local mail fake is not started`);
   launch([tsx, 'server/index.ts'], 'server');
   if (mode === 'dev') {
     launch([join(ROOT, 'node_modules', '.bin', 'vite')], 'vite dev server');
@@ -82,14 +112,14 @@ async function runApp() {
 /** A throwaway cluster in a temporary folder on a free port, removed afterwards (or TEST_DATABASE_URL). */
 async function withThrowawayDatabase(fn) {
   ensureDebianPackages({ postgres: !process.env.TEST_DATABASE_URL });
-  let cluster = null;
-  let tmp = null;
   let databaseUrl = process.env.TEST_DATABASE_URL;
   try {
     if (!databaseUrl) {
-      tmp = mkdtempSync(join(tmpdir(), 'porelith-test-'));
-      cluster = await startPrivateCluster({ dir: join(tmp, 'pg'), port: await freePort(), throwaway: true });
-      databaseUrl = cluster.databaseUrl;
+      const tmp = mkdtempSync(join(tmpdir(), 'porelith-test-'));
+      cleanups.push(() => rmSync(tmp, { recursive: true, force: true }));
+      const dir = join(tmp, 'pg');
+      cleanups.push(() => stopCluster({ dir }));
+      databaseUrl = (await startPrivateCluster({ dir, port: await freePort(), throwaway: true })).databaseUrl;
     }
     const env = {
       ...process.env,
@@ -101,8 +131,7 @@ async function withThrowawayDatabase(fn) {
     await run(tsx, ['server/db/setup.ts', '--demo'], { env, label: 'database' });
     return await fn(env);
   } finally {
-    if (cluster) stopCluster(cluster);
-    if (tmp) rmSync(tmp, { recursive: true, force: true });
+    cleanUp();
   }
 }
 
@@ -124,4 +153,7 @@ async function runBench() {
   );
 }
 
-main().catch((err) => fail(err instanceof Error ? err.message : String(err)));
+main().catch((err) => {
+  cleanUp();
+  fail(err instanceof Error ? err.message : String(err));
+});
