@@ -99,7 +99,10 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
   if (merged.length < 3) {
     throw new SurfaceInputError(`A surface needs at least 3 wells with a value at different locations; found ${merged.length}.`);
   }
-  const data: DataPoint[] = merged.map((m) => ({ x: m.x, y: m.y, value: m.value }));
+  // Pressures are solved in MPa: with sills of ~10¹³ Pa² beside the unit row of the kriging system, the LU's
+  // pivot test (relative to the largest entry) would call a sound system singular. Results are scaled back below.
+  const scale = surfaceSiUnit(params.quantity) === 'Pa' ? 1e6 : 1;
+  const data: DataPoint[] = merged.map((m) => ({ x: m.x, y: m.y, value: m.value / scale }));
 
   const extentLonLat = turf.buffer(turf.feature(outline), params.extentBufferKm, { units: 'kilometers' })!.geometry as Polygon;
   const ringM = extentLonLat.coordinates[0].map(frame.forward);
@@ -122,13 +125,16 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
   let estimates: { value: number; variance: number | null }[];
   progress('interpolating', 0, targets.length);
   if (flat) {
-    warnings.push(`All ${data.length} wells have the same value (${values[0]}): the surface is flat and its kriging variance is zero.`);
-    estimates = targets.map(() => ({ value: values[0], variance: params.method.kind === 'kriging' ? 0 : null }));
+    warnings.push(`All ${data.length} wells have the same value (${values[0] * scale}): the surface is flat and its kriging variance is zero.`);
+    estimates = targets.map(() => ({ value: values[0] * scale, variance: params.method.kind === 'kriging' ? 0 : null }));
   } else if (params.method.kind === 'kriging') {
     let maxD = 0;
     for (let i = 0; i < data.length; i++) for (let j = i + 1; j < data.length; j++) maxD = Math.max(maxD, Math.hypot(data[i].x - data[j].x, data[i].y - data[j].y));
     experimental = experimentalVariogram(data, { lags: EXPERIMENTAL_LAGS, lagWidth: maxD / 2 / EXPERIMENTAL_LAGS });
-    if (params.method.variogram) variogram = params.method.variogram;
+    if (params.method.variogram) {
+      const v = params.method.variogram;
+      variogram = { ...v, nugget: v.nugget / scale ** 2, sill: v.sill / scale ** 2 };
+    }
     else {
       if (experimental.length < 3) throw new SurfaceInputError('Too few well pairs to fit a variogram: give one by hand, or use inverse-distance weighting.');
       variogram = fitVariogram(experimental, { model: params.method.model });
@@ -136,10 +142,10 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
     }
     const v = variogram;
     const maxNeighbours = Math.min(params.method.maxNeighbours, data.length);
-    estimates = inChunks(targets, (chunk) => ordinaryKriging(data, v, chunk, { maxNeighbours }).map((e) => ({ value: e.value, variance: e.variance })), progress);
+    estimates = inChunks(targets, (chunk) => ordinaryKriging(data, v, chunk, { maxNeighbours }).map((e) => ({ value: e.value * scale, variance: e.variance * scale ** 2 })), progress);
   } else {
     const power = params.method.power;
-    estimates = inChunks(targets, (chunk) => idw(data, chunk, { power }).map((value) => ({ value, variance: null as number | null })), progress);
+    estimates = inChunks(targets, (chunk) => idw(data, chunk, { power }).map((value) => ({ value: value * scale, variance: null as number | null })), progress);
   }
   progress('cross-validating', targets.length, targets.length);
 
@@ -197,6 +203,7 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
   const x2 = x1 + g.nx * g.cellSize;
   const y2 = y1 + g.ny * g.cellSize;
   const byIndex = new Map(loo.residuals.map((r) => [r.index, r]));
+  const at = (v: number | undefined) => (v === undefined ? null : v * scale);
   return {
     grid: {
       nx: g.nx,
@@ -213,8 +220,14 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
     },
     contours,
     extent: extentLonLat as Surface['extent'],
-    variogram: variogram ? { model: variogram, experimental, fitted } : null,
-    crossValidation: { rmse: loo.rmse, meanError: loo.meanError },
+    variogram: variogram
+      ? {
+          model: { ...variogram, nugget: variogram.nugget * scale ** 2, sill: variogram.sill * scale ** 2 },
+          experimental: experimental.map((e) => ({ ...e, gamma: e.gamma * scale ** 2 })),
+          fitted,
+        }
+      : null,
+    crossValidation: { rmse: loo.rmse * scale, meanError: loo.meanError * scale },
     wells: merged.flatMap((m, index) =>
       raw
         .filter((p) => m.members.includes(p.name))
@@ -226,8 +239,8 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
           value: p.value,
           interpretationVersion: p.interpretationVersion,
           ...(p.atDepth ? { atDepth: p.atDepth } : {}),
-          residual: byIndex.get(index)?.residual ?? null,
-          predicted: byIndex.get(index)?.predicted ?? null,
+          residual: at(byIndex.get(index)?.residual),
+          predicted: at(byIndex.get(index)?.predicted),
         })),
     ),
     warnings,
