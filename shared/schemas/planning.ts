@@ -89,6 +89,11 @@ export const offsetCandidatesQuery = z.object({
   prospectBufferKm: z.coerce.number().min(0).max(100).optional(),
 });
 
+/** Wells around a prospect alone: inside its outline or within this buffer of it. */
+export const prospectOffsetQuery = z.object({
+  bufferKm: z.coerce.number().min(0, 'must be 0 km or more').max(100, 'must be at most 100 km').default(10),
+});
+
 export const offsetCandidateSchema = z.object({
   wellId: z.string().uuid(),
   name: z.string(),
@@ -97,7 +102,7 @@ export const offsetCandidateSchema = z.object({
   lon: z.number(),
   lat: z.number(),
   distanceKm: z.number(),
-  /** From the planned well to the offset, degrees clockwise from north. */
+  /** From the planned well (or the prospect's centroid) to the offset, degrees clockwise from north. */
   azimuthDeg: z.number(),
   waterDepthM: z.number().nullable(),
   waterDepthDiffM: z.number().nullable(),

@@ -94,6 +94,14 @@ export function offsetSearchQuery(search: OffsetSearch): string {
 }
 
 /**
+ * Wells inside a prospect's outline or within `bufferKm` of it, best first (distances from the outline).
+ * @example const around = await listProspectWells(teamId, prospect.id, 10);
+ */
+export function listProspectWells(teamId: string, prospectId: string, bufferKm: number, client: ApiClient = api): Promise<OffsetCandidate[]> {
+  return client.get(`/api/teams/${teamId}/prospects/${prospectId}/offset-wells?bufferKm=${bufferKm}`, z.array(offsetCandidateSchema));
+}
+
+/**
  * Wells that could serve as offsets for a planned well, best first.
  * @example const ranked = await listOffsetCandidates(teamId, pw.id, { radiusKm: 25 });
  */

@@ -73,6 +73,43 @@ describe('prospects', () => {
   });
 });
 
+describe('wells around a prospect alone', () => {
+  it('lists wells inside the outline or within the buffer, distances from the outline matching turf', async () => {
+    const geometry = square(-101, -32.5, 0.02);
+    const p = await planner.agent.post(`${base}/prospects`).send({ name: 'Lantern Screen', geometry, targetTopM: 2800, targetBaseM: 3500 });
+    expect(p.status).toBe(201);
+    const res = await planner.agent.get(`${base}/prospects/${p.body.id}/offset-wells?bufferKm=10`);
+    expect(res.status).toBe(200);
+    const outline = turf.polygon(geometry.coordinates);
+    // Independent reference: turf's point-to-polygon distance (0 inside), computed for every seeded well.
+    const expected = WELLS.filter((w) => Math.max(0, turf.pointToPolygonDistance(turf.point([w[1], w[2]]), outline, { units: 'kilometers' })) <= 10).map((w) => w[0]);
+    expect(res.body.map((c: { name: string }) => c.name).sort()).toEqual([...expected].sort());
+    for (const c of res.body) {
+      const w = WELLS.find((x) => x[0] === c.name)!;
+      const ref = Math.max(0, turf.pointToPolygonDistance(turf.point([w[1], w[2]]), outline, { units: 'kilometers' }));
+      // Sphere (turf) against the WGS 84 spheroid (PostGIS geography): within 1 % or 20 m.
+      expect(Math.abs(c.distanceKm - ref)).toBeLessThan(Math.max(0.02, ref * 0.01));
+      // Depth coverage against the base of the target, both below sea level (the CSV gives no datum: 0 m).
+      expect(c.tdCoverage).toBeCloseTo(w[4] / 3500, 9);
+      expect(c.inOffsetSet).toBe(false);
+    }
+    // NEAR-1 stands inside the outline: distance 0, and it outranks everything else.
+    expect(res.body[0]).toMatchObject({ name: 'NEAR-1', distanceKm: 0 });
+  });
+
+  it('refuses a negative or huge buffer by name, and another team gets a 404', async () => {
+    const p = (await planner.agent.get(`${base}/prospects`)).body.find((x: { name: string }) => x.name === 'Lantern Screen');
+    for (const b of ['-1', '500']) {
+      const res = await planner.agent.get(`${base}/prospects/${p.id}/offset-wells?bufferKm=${b}`);
+      expect(res.status).toBe(400);
+      expect(res.body.error.details[0].path).toBe('bufferKm');
+    }
+    const other = await freshTeamAgent(ctx, 'Other planning team', 'planner');
+    const res = await other.agent.get(`/api/teams/${other.teamId}/prospects/${p.id}/offset-wells`);
+    expect(res.status).toBe(404);
+  });
+});
+
 describe('planned wells and offsets', () => {
   let plannedId: string;
 

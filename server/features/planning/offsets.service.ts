@@ -1,8 +1,9 @@
-import { and, eq, inArray, sql } from 'drizzle-orm';
+import { and, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import type { OffsetCandidate, OffsetSetBody, OffsetSetEntry } from '../../../shared/schemas/planning';
 import type { Db } from '../../db/client';
 import { offsetPicks, users, wells } from '../../db/schema';
 import { badRequest } from '../../lib/httpError';
+import { getProspect } from '../prospects/prospects.service';
 import { getPlannedWell } from './plannedWells.service';
 
 /**
@@ -39,57 +40,93 @@ export async function offsetCandidates(db: Db, teamId: string, plannedWellId: st
     const r = await db.execute<{ km: number }>(sql`SELECT (SELECT max(ST_Distance(${here}::geography, (dp).geom::geography)) FROM ST_DumpPoints(outline) dp) / 1000 AS km FROM prospects WHERE id = ${planned.prospectId}`);
     radiusKm = Number(r.rows[0]?.km ?? 0) + opts.prospectBufferKm;
   }
-  const rows = await db.execute<{
-    id: string; name: string; uwi: string | null; status: string; lon: number; lat: number; distance_m: number; azimuth_rad: number | null;
-    water_depth_m: number | null; td_tvd_m: number | null; td_md_m: number | null; pressures: number; logs: number; has_lot: boolean; has_survey: boolean; in_set: boolean; top_tvdss_m: number | null;
-  }>(sql`
+  const rows = await candidateRows(db, teamId, here, area, plannedWellId);
+  return rows
+    .map((r) => {
+      const waterDepthDiffM = r.water_depth_m !== null && planned.waterDepthM !== null ? r.water_depth_m - planned.waterDepthM : null;
+      const tdTvdM = r.td_tvd_m ?? r.td_md_m;
+      // Both depths are TVD below their own rig floor; rig heights differ by metres, TDs by kilometres.
+      const tdCoverage = tdTvdM === null ? null : tdTvdM / planned.plannedTdM;
+      return toCandidate(r, { distanceKm: Number(r.distance_m) / 1000, waterDepthDiffM, tdCoverage, radiusKm });
+    })
+    .sort(byScore);
+}
+
+/**
+ * Wells around a prospect before any planned well is placed: inside its outline or within `bufferKm` of it,
+ * distances from the outline (0 inside) and azimuths from its centroid. Depth coverage is against the base of
+ * the target when the prospect has one (both as TVD below sea level); water depth is not compared.
+ */
+export async function prospectOffsetWells(db: Db, teamId: string, prospectId: string, bufferKm: number): Promise<OffsetCandidate[]> {
+  const prospect = await getProspect(db, teamId, prospectId);
+  const outline = sql`(SELECT outline FROM prospects WHERE id = ${prospectId} AND team_id = ${teamId})`;
+  const centre = sql`ST_Centroid(${outline})`;
+  const area = sql`ST_DWithin(w.location::geography, ${outline}::geography, ${bufferKm * 1000})`;
+  const rows = await candidateRows(db, teamId, centre, area, null, sql`ST_Distance(w.location::geography, ${outline}::geography)`);
+  return rows
+    .map((r) => {
+      const tdTvdssM = r.td_tvd_m === null ? null : r.td_tvd_m - r.datum_elevation_m;
+      const tdCoverage = tdTvdssM === null || prospect.targetBaseM === null ? null : tdTvdssM / prospect.targetBaseM;
+      // "Near" is measured across the buffer: a well inside the outline scores full marks.
+      return toCandidate(r, { distanceKm: Number(r.distance_m) / 1000, waterDepthDiffM: null, tdCoverage, radiusKm: Math.max(bufferKm, 1e-3) });
+    })
+    .sort(byScore);
+}
+
+type CandidateRow = {
+  id: string; name: string; uwi: string | null; status: string; lon: number; lat: number; distance_m: number; azimuth_rad: number | null;
+  water_depth_m: number | null; datum_elevation_m: number; td_tvd_m: number | null; td_md_m: number | null; pressures: number; logs: number;
+  has_lot: boolean; has_survey: boolean; in_set: boolean; top_tvdss_m: number | null;
+};
+
+/** The facts the ranking reads for every team well in `area`, nearest first; distance from `here` unless given. */
+async function candidateRows(db: Db, teamId: string, here: SQL, area: SQL, plannedWellId: string | null, distance?: SQL): Promise<CandidateRow[]> {
+  const inSet = plannedWellId ? sql`EXISTS (SELECT 1 FROM offset_picks o WHERE o.planned_well_id = ${plannedWellId} AND o.well_id = w.id)` : sql`false`;
+  const rows = await db.execute<CandidateRow>(sql`
     SELECT w.id, w.name, w.uwi, w.status::text, ST_X(w.location) AS lon, ST_Y(w.location) AS lat,
-      ST_Distance(w.location::geography, ${here}::geography) AS distance_m,
+      ${distance ?? sql`ST_Distance(w.location::geography, ${here}::geography)`} AS distance_m,
       ST_Azimuth(${here}::geography, w.location::geography) AS azimuth_rad,
-      w.water_depth_m, w.td_tvd_m, w.td_md_m,
+      w.water_depth_m, w.datum_elevation_m, w.td_tvd_m, w.td_md_m,
       (SELECT count(*)::int FROM pressure_observations p WHERE p.well_id = w.id) AS pressures,
       (SELECT count(*)::int FROM log_curves l WHERE l.well_id = w.id) AS logs,
       EXISTS (SELECT 1 FROM pressure_observations p WHERE p.well_id = w.id AND p.kind IN ('lot', 'fit')) AS has_lot,
       EXISTS (SELECT 1 FROM survey_stations s WHERE s.well_id = w.id) AS has_survey,
-      EXISTS (SELECT 1 FROM offset_picks o WHERE o.planned_well_id = ${plannedWellId} AND o.well_id = w.id) AS in_set,
+      ${inSet} AS in_set,
       (SELECT (i.content->'top'->>'tvdM')::float8 - w.datum_elevation_m FROM interpretations i
         WHERE i.well_id = w.id AND i.status = 'accepted' ORDER BY i.version DESC LIMIT 1) AS top_tvdss_m
     FROM wells w
     WHERE w.team_id = ${teamId} AND ${area}
     ORDER BY distance_m
     LIMIT 500`);
-  return rows.rows
-    .map((r) => {
-      const distanceKm = Number(r.distance_m) / 1000;
-      const waterDepthDiffM = r.water_depth_m !== null && planned.waterDepthM !== null ? r.water_depth_m - planned.waterDepthM : null;
-      const tdTvdM = r.td_tvd_m ?? r.td_md_m;
-      // Both depths are TVD below their own rig floor; rig heights differ by metres, TDs by kilometres.
-      const tdCoverage = tdTvdM === null ? null : tdTvdM / planned.plannedTdM;
-      const c = {
-        wellId: r.id,
-        name: r.name,
-        uwi: r.uwi,
-        status: r.status,
-        lon: Number(r.lon),
-        lat: Number(r.lat),
-        distanceKm,
-        azimuthDeg: r.azimuth_rad === null ? 0 : (Number(r.azimuth_rad) * 180) / Math.PI,
-        waterDepthM: r.water_depth_m,
-        waterDepthDiffM,
-        tdTvdM,
-        tdCoverage,
-        pressureCount: r.pressures,
-        logCount: r.logs,
-        hasLot: r.has_lot,
-        hasSurvey: r.has_survey,
-        topTvdssM: r.top_tvdss_m === null ? null : Number(r.top_tvdss_m),
-        inOffsetSet: r.in_set,
-        score: 0,
-      };
-      return { ...c, score: offsetScore({ ...c, radiusKm }) };
-    })
-    .sort((a, b) => b.score - a.score || a.distanceKm - b.distanceKm);
+  return rows.rows;
 }
+
+function toCandidate(r: CandidateRow, m: { distanceKm: number; waterDepthDiffM: number | null; tdCoverage: number | null; radiusKm: number }): OffsetCandidate {
+  const c = {
+    wellId: r.id,
+    name: r.name,
+    uwi: r.uwi,
+    status: r.status,
+    lon: Number(r.lon),
+    lat: Number(r.lat),
+    distanceKm: m.distanceKm,
+    azimuthDeg: r.azimuth_rad === null ? 0 : (Number(r.azimuth_rad) * 180) / Math.PI,
+    waterDepthM: r.water_depth_m,
+    waterDepthDiffM: m.waterDepthDiffM,
+    tdTvdM: r.td_tvd_m ?? r.td_md_m,
+    tdCoverage: m.tdCoverage,
+    pressureCount: r.pressures,
+    logCount: r.logs,
+    hasLot: r.has_lot,
+    hasSurvey: r.has_survey,
+    topTvdssM: r.top_tvdss_m === null ? null : Number(r.top_tvdss_m),
+    inOffsetSet: r.in_set,
+    score: 0,
+  };
+  return { ...c, score: offsetScore({ ...c, radiusKm: m.radiusKm }) };
+}
+
+const byScore = (a: OffsetCandidate, b: OffsetCandidate) => b.score - a.score || a.distanceKm - b.distanceKm;
 
 export async function getOffsetSet(db: Db, teamId: string, plannedWellId: string): Promise<OffsetSetEntry[]> {
   await getPlannedWell(db, teamId, plannedWellId);

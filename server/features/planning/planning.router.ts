@@ -1,12 +1,12 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { offsetCandidatesQuery, offsetSetBody, plannedWellBody, plannedWellPatchBody, prospectBody, prospectPatchBody } from '../../../shared/schemas/planning';
+import { offsetCandidatesQuery, offsetSetBody, prospectOffsetQuery, plannedWellBody, plannedWellPatchBody, prospectBody, prospectPatchBody } from '../../../shared/schemas/planning';
 import type { Db } from '../../db/client';
 import { parse } from '../../lib/parse';
 import type { TeamChanges } from '../../lib/teamChanges';
 import { requireTeam, teamIdOf } from '../../middleware/guards';
 import { createProspect, deleteProspect, getProspect, listProspects, updateProspect } from '../prospects/prospects.service';
-import { getOffsetSet, offsetCandidates, putOffsetSet } from './offsets.service';
+import { getOffsetSet, offsetCandidates, prospectOffsetWells, putOffsetSet } from './offsets.service';
 import { createPlannedWell, deletePlannedWell, getPlannedWell, listPlannedWells, updatePlannedWell } from './plannedWells.service';
 
 const idParam = z.object({ id: z.string().uuid('must be an id') });
@@ -36,6 +36,10 @@ export function planningRouter(db: Db, changes: TeamChanges): Router {
     await deleteProspect(db, teamIdOf(req), id(req));
     changes.bump(teamIdOf(req));
     res.status(204).end();
+  });
+
+  r.get('/:teamId/prospects/:id/offset-wells', read, async (req, res) => {
+    res.json(await prospectOffsetWells(db, teamIdOf(req), id(req), parse(prospectOffsetQuery, req.query).bufferKm));
   });
 
   r.get('/:teamId/planned-wells', read, async (req, res) => {
