@@ -1,6 +1,7 @@
 import { TEAM_TILE_LAYERS } from '@shared/schemas/planning';
 
-export type TeamTileLayer = (typeof TEAM_TILE_LAYERS)[number];
+/** A fixed team layer, or an uploaded reference layer by its id (`reference-<uuid>`). */
+export type TeamTileLayer = (typeof TEAM_TILE_LAYERS)[number] | `reference-${string}`;
 
 /** Zoom from which the server sends one point per well instead of clusters. */
 export const WELL_POINTS_MIN_ZOOM = 9;

@@ -6,6 +6,7 @@ import {
   offsetSetEntrySchema,
   plannedWellSchema,
   prospectSchema,
+  referenceLayerSchema,
   type OffsetCandidate,
   type OffsetSetEntry,
   type PlannedWell,
@@ -13,7 +14,7 @@ import {
 } from '@shared/schemas/planning';
 import { wellSummarySchema, type WellSummary } from '@shared/schemas/wells';
 import { errorReply, installFakeServer, jsonReply, TEAM_A } from '@/testing/fakeServer';
-import { useAtlasStore } from './atlas';
+import { ATLAS_REFERENCE_TOGGLES_KEY, useAtlasStore } from './atlas';
 
 // Fixtures are parsed with the shared contract schemas, so they have the shape the server sends.
 const PW = '11111111-1111-4111-8111-111111111111';
@@ -42,6 +43,12 @@ const candidate = (w: WellSummary, score: number): OffsetCandidate =>
   });
 const entry = (w: WellSummary, reason: string | null): OffsetSetEntry =>
   offsetSetEntrySchema.parse({ wellId: w.id, name: w.name, reason, addedBy: null, addedByName: 'Priya', addedAt: '2026-01-02T00:00:00Z' });
+
+const L1 = '55555555-5555-4555-8555-555555555555';
+const blocks = referenceLayerSchema.parse({
+  id: L1, name: 'Blocks', kind: 'lease_blocks', color: '#A0782C', featureCount: 2, geometryTypes: ['POLYGON'],
+  bbox: [-101, -32.6, -100.8, -32.5], createdAt: '2026-01-01T00:00:00.000Z',
+});
 
 const w1 = well(W1, 'A-1', -101.05, -32.45);
 const w2 = well(W2, 'B-2', -100.95, -32.55);
@@ -137,5 +144,35 @@ describe('useAtlasStore', () => {
     await Promise.resolve();
     setActivePinia(createPinia());
     expect(useAtlasStore().toggles.wellNames).toBe(false);
+  });
+
+  it('lists the reference layers, remembers their switches, and forgets a deleted one', async () => {
+    server({
+      [`GET ${base}/layers`]: () => jsonReply(200, [blocks]),
+      [`DELETE ${base}/layers/${L1}`]: () => new Response(null, { status: 204 }),
+    });
+    const atlas = useAtlasStore();
+    await atlas.load(TEAM_A);
+    await vi.waitFor(() => expect(atlas.referenceState).toBe('done'));
+    expect(atlas.referenceLayers.map((l) => l.name)).toEqual(['Blocks']);
+    atlas.setReferenceToggle(L1, false);
+    await Promise.resolve();
+    expect(JSON.parse(localStorage.getItem(ATLAS_REFERENCE_TOGGLES_KEY) ?? '{}')).toEqual({ [L1]: false });
+    setActivePinia(createPinia());
+    const again = useAtlasStore();
+    expect(again.referenceToggles[L1]).toBe(false);
+    await again.load(TEAM_A);
+    await again.deleteReferenceLayer(L1);
+    expect(again.referenceLayers).toEqual([]);
+    expect(again.referenceToggles).toEqual({});
+  });
+
+  it('keeps the map when the layer list fails, reporting it apart', async () => {
+    server({ [`GET ${base}/layers`]: () => errorReply(500, 'internal', 'Something broke.') });
+    const atlas = useAtlasStore();
+    await atlas.load(TEAM_A);
+    await vi.waitFor(() => expect(atlas.referenceState).toBe('error'));
+    expect(atlas.state).toBe('done');
+    expect(atlas.referenceError).toBe('Something broke.');
   });
 });

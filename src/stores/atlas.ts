@@ -7,18 +7,28 @@ import type {
   PlannedWellBody,
   Prospect,
   ProspectBody,
+  ReferenceLayer,
 } from '@shared/schemas/planning';
 import type { WellSummary } from '@shared/schemas/wells';
+import * as layersApi from '@/api/layers';
 import { listWellsForMap } from '@/api/map';
 import * as planning from '@/api/planning';
 import { NO_SELECTION, type AtlasSelection } from '@/map/atlasLayers';
-import { readToggles, type LayerToggle, type LayerToggles } from '@/map/layerToggles';
+import {
+  readReferenceToggles,
+  readToggles,
+  withoutReference,
+  type LayerToggle,
+  type LayerToggles,
+  type ReferenceToggles,
+} from '@/map/layerToggles';
 import { candidateMarks, offsetFeatures, type OffsetFeatureCollection, type OffsetMark } from '@/map/offsetFeatures';
 import { readStored, writeStored } from '@/utils/storage';
 import type { LoadState } from './session';
 
 // Same `porelith.` prefix as the keys in utils/storage.ts.
 export const ATLAS_TOGGLES_KEY = 'porelith.atlas.layers';
+export const ATLAS_REFERENCE_TOGGLES_KEY = 'porelith.atlas.referenceLayers';
 
 /** An offset well ticked in the table, not necessarily saved yet. */
 export interface OffsetPick {
@@ -32,7 +42,7 @@ const sameSet = (picks: readonly OffsetPick[], saved: readonly OffsetSetEntry[])
   picks.every((p) => saved.some((s) => s.wellId === p.wellId && (s.reason ?? '') === p.reason.trim()));
 
 /**
- * The Atlas's shared state: the team's prospects, planned wells and wells for framing, what is selected
+ * The Atlas's shared state: the team's prospects, planned wells, reference layers and wells for framing, what is selected
  * on the map, and the offset picking of the selected planned well. The map view, its panels and the
  * prospects list read it; every change goes to the server first and lands here from its answer.
  * @example
@@ -59,6 +69,12 @@ export const useAtlasStore = defineStore('atlas', () => {
   watch(toggles, (t) => writeStored(ATLAS_TOGGLES_KEY, JSON.stringify(t)), { deep: true });
 
   const selection = ref<AtlasSelection>({ ...NO_SELECTION });
+
+  const referenceLayers = ref<ReferenceLayer[]>([]);
+  const referenceState = ref<LoadState>('idle');
+  const referenceError = ref<string | null>(null);
+  const referenceToggles = ref<ReferenceToggles>(readReferenceToggles(readStored(ATLAS_REFERENCE_TOGGLES_KEY)));
+  watch(referenceToggles, (t) => writeStored(ATLAS_REFERENCE_TOGGLES_KEY, JSON.stringify(t)), { deep: true });
 
   const candidates = shallowRef<OffsetCandidate[]>([]);
   const candidatesState = ref<LoadState>('idle');
@@ -113,6 +129,8 @@ export const useAtlasStore = defineStore('atlas', () => {
     error.value = null;
     selection.value = { ...NO_SELECTION };
     resetOffsets();
+    // Apart from the rest: a failing layer list costs the reference layers, not the map.
+    void loadReferenceLayers(id);
     try {
       const [p, pw, w] = await Promise.all([planning.listProspects(id), planning.listPlannedWells(id), listWellsForMap(id)]);
       if (teamId.value !== id) return;
@@ -126,6 +144,43 @@ export const useAtlasStore = defineStore('atlas', () => {
       error.value = (e as Error).message;
       state.value = 'error';
     }
+  }
+
+  async function loadReferenceLayers(id: string): Promise<void> {
+    referenceLayers.value = [];
+    referenceState.value = 'loading';
+    referenceError.value = null;
+    try {
+      const found = await layersApi.listReferenceLayers(id);
+      if (teamId.value !== id) return;
+      referenceLayers.value = found;
+      referenceState.value = 'done';
+    } catch (e) {
+      if (teamId.value !== id) return;
+      referenceError.value = (e as Error).message;
+      referenceState.value = 'error';
+    }
+  }
+
+  /** Uploads a layer and shows it at once; rejects with the server's ApiClientError, which names the feature or field. */
+  async function uploadReferenceLayer(fields: layersApi.ReferenceLayerFields, file: File): Promise<ReferenceLayer> {
+    const id = requireTeam();
+    const created = await layersApi.uploadReferenceLayer(id, fields, file);
+    if (teamId.value === id) {
+      referenceLayers.value = [...referenceLayers.value, created].sort((a, b) => a.name.localeCompare(b.name));
+      referenceToggles.value = { ...referenceToggles.value, [created.id]: true };
+    }
+    return created;
+  }
+
+  async function deleteReferenceLayer(layerId: string): Promise<void> {
+    await layersApi.deleteReferenceLayer(requireTeam(), layerId);
+    referenceLayers.value = referenceLayers.value.filter((l) => l.id !== layerId);
+    referenceToggles.value = withoutReference(referenceToggles.value, layerId);
+  }
+
+  function setReferenceToggle(layerId: string, on: boolean): void {
+    referenceToggles.value = { ...referenceToggles.value, [layerId]: on };
   }
 
   function bumpTiles(): void {
@@ -259,6 +314,10 @@ export const useAtlasStore = defineStore('atlas', () => {
     tileVersion,
     toggles,
     selection,
+    referenceLayers,
+    referenceState,
+    referenceError,
+    referenceToggles,
     candidates,
     candidatesState,
     candidatesError,
@@ -275,6 +334,9 @@ export const useAtlasStore = defineStore('atlas', () => {
     load,
     bumpTiles,
     setToggle,
+    setReferenceToggle,
+    uploadReferenceLayer,
+    deleteReferenceLayer,
     select,
     createProspect,
     updateProspect,
