@@ -3,14 +3,18 @@ import type { Surface } from '../../../shared/schemas/surfaces';
 
 /**
  * The surface at a lon/lat by bilinear interpolation between the four surrounding cell centres
- * (value and standard deviation); null outside the grid or where a neighbour cell lies outside the extent.
+ * (value and standard deviation); null outside the grid's cell centres (a one-cell-wide grid: outside its cell) or
+ * where a neighbour cell lies outside the extent.
  * @example valueAt(surface.grid, -101.0, -32.5) // { value: 2412.3, stdDev: 38.1 }
  */
 export function valueAt(grid: Surface['grid'], lon: number, lat: number): { value: number; stdDev: number | null } | null {
   const [x, y] = proj4('EPSG:4326', grid.projection).forward([lon, lat]);
   const fi = (x - grid.x0) / grid.cellSizeM;
   const fj = (y - grid.y0) / grid.cellSizeM;
-  if (fi < 0 || fj < 0 || fi > grid.nx - 1 || fj > grid.ny - 1) return null;
+  // Between cell centres as a rule; across a grid one cell wide (or tall) there is no second centre to reach,
+  // so that column (row) answers over its own cell, half a cell either side of its centre line.
+  const inRange = (f: number, n: number) => (n === 1 ? Math.abs(f) <= 0.5 : f >= 0 && f <= n - 1);
+  if (!inRange(fi, grid.nx) || !inRange(fj, grid.ny)) return null;
   // A grid one cell wide (or tall) has no second column (row) to blend with: index −1 and a read past the row
   // would follow. Clamp to the one column and take it whole, as the client's bilinearAtCell does.
   const i = Math.max(0, Math.min(Math.floor(fi), grid.nx - 2));

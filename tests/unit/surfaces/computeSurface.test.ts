@@ -103,3 +103,45 @@ describe('bad input', () => {
     expect(() => run({ kind: 'idw', power: 2 }, picks, { cellSizeM: 25 })).toThrow(/^Grid of \d+ × \d+ = \d+ cells exceeds the limit of 250000: choose a larger cell size\.$/);
   });
 });
+
+describe('quantities in other units and progress', () => {
+  const variogram = { model: 'exponential' as const, nugget: 100, sill: 60_000, range: 25_000 };
+
+  it('kriges pressures (Pa) exactly as the same numbers in another unit: kriging is linear in the data', () => {
+    // Ordinary kriging weights depend only on the variogram's shape, so multiplying every value by k and the sill and
+    // nugget by k² multiplies estimates by k and variances by k² (Isaaks & Srivastava 1989, ch. 12).
+    const k = 1e4;
+    const depth = run({ kind: 'kriging', variogram });
+    const pressure = run(
+      { kind: 'kriging', variogram: { ...variogram, nugget: variogram.nugget * k * k, sill: variogram.sill * k * k } },
+      picks.map((p) => ({ ...p, value: p.value * k })),
+      { quantity: 'overpressure_at_depth', depthTvdssM: 3000, contourIntervalPa: 1e6 },
+    );
+    depth.grid.values.forEach((v, i) => {
+      if (v === null) expect(pressure.grid.values[i]).toBeNull();
+      else expect(pressure.grid.values[i]! / (v * k)).toBeCloseTo(1, 9);
+    });
+    expect(pressure.grid.stdDev![depth.grid.values.findIndex((v) => v !== null)]! / (depth.grid.stdDev![depth.grid.values.findIndex((v) => v !== null)]! * k)).toBeCloseTo(1, 9);
+    expect(pressure.crossValidation.rmse / (depth.crossValidation.rmse * k)).toBeCloseTo(1, 9);
+    expect(pressure.variogram!.model.sill).toBeCloseTo(variogram.sill * k * k, 0);
+    expect((pressure.contours.features[0] as { properties: { label: string } }).properties.label).toMatch(/ Pa$/);
+  });
+
+  it('reports progress during the interpolation, not only between phases', () => {
+    const calls: [string, number, number][] = [];
+    computeSurface(
+      { points: picks, outline, params: surfaceRequestBody.parse({ method: { kind: 'kriging', variogram }, cellSizeM: 250, extentBufferKm: 0 }) },
+      (phase, done, total) => calls.push([phase, done, total]),
+    );
+    const during = calls.filter(([phase, done, total]) => phase === 'interpolating' && done > 0 && done < total);
+    expect(during.length).toBeGreaterThan(1);
+    const dones = calls.filter(([phase]) => phase === 'interpolating').map(([, done]) => done);
+    expect(dones).toEqual([...dones].sort((a, b) => a - b));
+  });
+
+  it('asks for the depth of an at-depth quantity, naming the field', () => {
+    const r = surfaceRequestBody.safeParse({ quantity: 'emw_at_depth' });
+    expect(r.success).toBe(false);
+    expect(r.error!.issues[0]).toMatchObject({ path: ['depthTvdssM'], message: 'is required for emw_at_depth: the depth below sea level, m' });
+  });
+});
