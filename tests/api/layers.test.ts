@@ -1,3 +1,5 @@
+import { VectorTile } from '@mapbox/vector-tile';
+import { PbfReader } from 'pbf';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { freshTeamAgent, memberAgent, startTestApp, type TestContext } from './support/testApp';
 
@@ -63,12 +65,52 @@ describe('reference layers', () => {
     expect((await team.agent.get(`${base}/layers`)).body.length).toBe(before);
   });
 
-  it('serves the layer as vector tiles, and only roles with the grant may upload', async () => {
+  it('refuses a file over the size limit and one with too many features, storing nothing', async () => {
+    const before = (await team.agent.get(`${base}/layers`)).body.length;
+    // 20 MB is MAX_LAYER_BYTES in server/features/layers/readLayerFile.ts; one byte more is refused by multer.
+    const huge = Buffer.alloc(20 * 1024 * 1024 + 1, 0x20);
+    const tooBig = await upload('huge.geojson', huge);
+    expect(tooBig.status).toBe(413);
+    expect(tooBig.body.error).toMatchObject({ code: 'file_too_large', message: 'The layer file is larger than the 20 MB limit.' });
+    const point = { type: 'Feature', properties: {}, geometry: { type: 'Point', coordinates: [-101, -32.5] } };
+    const many = await upload('many.geojson', fc(Array.from({ length: 50_001 }, () => point)));
+    expect(many.status).toBe(400);
+    expect(many.body.error.message).toBe('many.geojson has 50,001 features; the limit is 50,000.');
+    const nameless = await upload('x.geojson', fc([block(-101, -32.6, 'ok')]), { name: '  ' });
+    expect(nameless.body.error.details[0]).toEqual({ path: 'name', message: 'is required' });
+    expect((await team.agent.get(`${base}/layers`)).body.length).toBe(before);
+  });
+
+  it('serves the layer as vector tiles holding the uploaded features, and only roles with the grant may upload', async () => {
     const layers = (await team.agent.get(`${base}/layers`)).body;
     const blocks = layers.find((l: { name: string }) => l.name === 'Lease blocks');
     // z8 tile holding −101°, −32.55° (OpenStreetMap slippy-map formula: x = 56, y = 152)
-    const tile = await team.agent.get(`${base}/tiles/reference-${blocks.id}/8/56/152.mvt`);
+    const tile = await team.agent
+      .get(`${base}/tiles/reference-${blocks.id}/8/56/152.mvt`)
+      .buffer(true)
+      .parse((res, cb) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(tile.status).toBe(200);
+    expect(tile.headers['content-type']).toBe('application/vnd.mapbox-vector-tile');
+    // Decoded with @mapbox/vector-tile, the reader MapLibre itself uses.
+    const layer = new VectorTile(new PbfReader(tile.body as Buffer)).layers.reference;
+    expect(layer.length).toBe(2);
+    const features = Array.from({ length: layer.length }, (_, i) => layer.feature(i));
+    expect(features.map((f) => f.properties.name).sort()).toEqual(['Q-17', 'Q-18']);
+    expect(features.every((f) => f.type === 3)).toBe(true);
+    // Q-17 back in lon/lat: its corners within a z8 tile unit (~40 m) of where they were uploaded.
+    const q17 = features.find((f) => f.properties.name === 'Q-17')!.toGeoJSON(56, 152, 8) as { geometry: { coordinates: number[][][] } };
+    const lons = q17.geometry.coordinates[0].map((p) => p[0]);
+    const lats = q17.geometry.coordinates[0].map((p) => p[1]);
+    expect(Math.min(...lons)).toBeCloseTo(-101, 3);
+    expect(Math.max(...lons)).toBeCloseTo(-100.9, 3);
+    expect(Math.min(...lats)).toBeCloseTo(-32.6, 3);
+    expect(Math.max(...lats)).toBeCloseTo(-32.5, 3);
+    // A tile away from the blocks holds nothing of them.
+    expect((await team.agent.get(`${base}/tiles/reference-${blocks.id}/8/0/0.mvt`)).status).toBe(204);
     const planner = await memberAgent(ctx, team.teamId, 'planner');
     const refused = await planner.agent.post(`${base}/layers`).field('name', 'p').attach('file', fc([block(-101, -32.6, 'p')]), 'p.geojson');
     expect(refused.status).toBe(403);
