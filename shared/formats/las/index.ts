@@ -9,3 +9,4 @@ export { DEFAULT_LAS_NULL } from './wellInfo';
 export { LAS3_MESSAGE } from './versionInfo';
 export { MAX_LINE_LENGTH } from './lasLines';
 export type { LasFile, LasCurve, LasIndex, LasWellInfo, HeaderItem, DepthUnit } from './types';
+export { readLasLocation, parseDegrees, type LasWellLocation, type LasCoordinate } from './wellLocation';
