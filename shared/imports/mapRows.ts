@@ -19,6 +19,8 @@ export interface MappedRows {
   /** Lines that had at least one problem (their records are not in `records`). */
   invalidLines: number[];
   problems: Problem[];
+  /** Field key → the CSV column it is read from, so later checks can name the column as the file does. */
+  columnOfField: Record<string, string>;
 }
 
 /** Column → field key (null: ignore the column). */
@@ -105,10 +107,12 @@ export function mapCsvRows(csv: CsvFile, kind: CsvImportKind, mapping: ColumnMap
     if (f.required && !columnOf.has(f.key)) problems.push({ line: 1, message: `no column is mapped to the required field "${f.label}" (${f.key})` });
     const unit = unitFor(f, units);
     if (f.quantity && unit && !UNITS_FOR_QUANTITY[f.quantity].includes(unit)) {
-      problems.push({ line: 1, column: f.key, message: `unit "${unit}" is not one of ${UNITS_FOR_QUANTITY[f.quantity].join(', ')}` });
+      const index = columnOf.get(f.key);
+      problems.push({ line: 1, column: index === undefined ? f.key : csv.header[index], message: `unit "${unit}" is not one of ${UNITS_FOR_QUANTITY[f.quantity].join(', ')}` });
     }
   }
-  if (problems.length) return { records: [], invalidLines: [], problems };
+  const columnOfField = Object.fromEntries([...columnOf].map(([key, index]) => [key, csv.header[index]]));
+  if (problems.length) return { records: [], invalidLines: [], problems, columnOfField };
 
   const records: MappedRecord[] = [];
   const invalidLines: number[] = [];
@@ -168,5 +172,5 @@ export function mapCsvRows(csv: CsvFile, kind: CsvImportKind, mapping: ColumnMap
     if (ok) records.push(valueUnit ? { line: row.line, values, valueUnit } : { line: row.line, values });
     else invalidLines.push(row.line);
   }
-  return { records, invalidLines, problems };
+  return { records, invalidLines, problems, columnOfField };
 }

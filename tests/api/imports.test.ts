@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { pressureObservations, surveyStations, uploads, wells } from '../../server/db/schema';
+import { formationTops, pressureObservations, surveyStations, uploads, wells } from '../../server/db/schema';
 import { freshTeamAgent, startTestApp, type TestContext } from './support/testApp';
 
 const fixture = (name: string) => readFileSync(`tests/fixtures/imports/${name}`);
@@ -22,9 +22,10 @@ function post(name: string, kind: string, fields: Record<string, string> = {}, b
 }
 
 async function counts() {
-  const [row] = await ctx.db.execute<{ wells: number; pressures: number; stations: number; uploads: number }>(sql`
+  const [row] = await ctx.db.execute<{ wells: number; pressures: number; tops: number; stations: number; uploads: number }>(sql`
     SELECT (SELECT count(*)::int FROM ${wells} WHERE team_id = ${team.teamId}) AS wells,
            (SELECT count(*)::int FROM ${pressureObservations} p JOIN ${wells} w ON w.id = p.well_id WHERE w.team_id = ${team.teamId}) AS pressures,
+           (SELECT count(*)::int FROM ${formationTops} t JOIN ${wells} w ON w.id = t.well_id WHERE w.team_id = ${team.teamId}) AS tops,
            (SELECT count(*)::int FROM ${surveyStations} s JOIN ${wells} w ON w.id = s.well_id WHERE w.team_id = ${team.teamId}) AS stations,
            (SELECT count(*)::int FROM ${uploads} WHERE team_id = ${team.teamId}) AS uploads`).then((r) => r.rows);
   return row;
@@ -76,18 +77,26 @@ describe('well header CSV', () => {
     expect((await counts()).wells).toBe(before.wells);
   });
 
-  it('reports every bad row by line and column, and writes nothing', async () => {
+  it('reports every bad row by line and column as the file names it, in line order, and writes nothing', async () => {
     const before = await counts();
     const res = await post('wells-bad.csv', 'wells');
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('import_has_problems');
     expect(res.body.error.details).toEqual([
       { line: 3, column: 'Longitude', message: "'abc' is not a number" },
+      { line: 4, column: 'Latitude', message: 'latitude -132.4 is outside −90..90' },
+      { line: 5, column: 'Well Name', message: 'duplicate well "BAD-1" (first at line 2)' },
       { line: 6, column: 'Latitude', message: 'Latitude or northing is required' },
-      { line: 4, column: 'x', message: 'latitude -132.4 is outside −90..90' },
-      { line: 5, column: 'name', message: 'duplicate well "BAD-1" (first at line 2)' },
     ]);
     expect(await counts()).toEqual(before);
+  });
+
+  it('counts a row with the wrong number of fields as a skipped record', async () => {
+    const csv = Buffer.from('name,lon,lat\nR-1,-101.2,-32.4\nR-2,-101.3\nR-3,-101.4,-32.5\n');
+    const res = await post('ragged.csv', 'wells', { dryRun: 'true' }, csv);
+    expect(res.body.problems).toEqual([{ line: 3, message: 'expected 3 fields, found 2' }]);
+    expect(res.body.invalidLines).toEqual([3]);
+    expect(res.body.counts).toMatchObject({ records: 3, invalid: 1, valid: 2 });
   });
 
   it('imports the valid rows only when asked, recording the skipped lines in the upload', async () => {
@@ -119,6 +128,20 @@ describe('well header CSV', () => {
     // Zone 13 central meridian is 105°W; the false easting sits on it (UTM definition, value recalled from memory).
     expect(res.body.preview[0].lon).toBeCloseTo(-105, 6);
     expect(res.body.preview[0].lat).toBeLessThan(-32);
+  });
+
+  it('flags a UTM pair with easting and northing swapped, naming the column as the file does', async () => {
+    const csv = Buffer.from('name,easting,northing\nUTM-1,500000,6400000\nUTM-2,6400000,500000\n');
+    const res = await post('utm-swapped.csv', 'wells', { dryRun: 'true', epsg: '32713' }, csv);
+    // Reference: proj4 puts (6 400 000, 500 000) in zone 13S at lon −19.203, 85.8° from the 105°W central meridian.
+    expect(res.body.problems).toEqual([
+      {
+        line: 3,
+        column: 'easting',
+        message: '(6400000, 500000) in EPSG:32713 lies at lon -19.203, 85.8° from the zone 13 central meridian (105°W): are easting and northing swapped, or is the EPSG code wrong?',
+      },
+    ]);
+    expect(res.body.counts).toMatchObject({ valid: 1, invalid: 1 });
   });
 
   it('names a required field no column maps to', async () => {
@@ -184,14 +207,66 @@ describe('surveys and pressures', () => {
     expect(b.kind).toBe('formation_test');
   });
 
-  it('names an unknown well and a value whose unit must be wrong', async () => {
-    const csv = Buffer.from('well,kind,md (m),value,unit\nNOPE-9,kick,1000,1.2,sg\nTEST-1,kick,1000,9000,sg\n');
+  it('names an unknown well and a value whose unit must be wrong, and writes nothing', async () => {
+    const before = await counts();
+    const csv = Buffer.from('well,kind,md (m),value,unit\nNOPE-9,kick,1000,1.2,sg\nTEST-1,kick,1000,9000,sg\nTEST-1,kick,1100,1.3,sg\n');
     const res = await post('bad-pressures.csv', 'pressures', {}, csv);
     expect(res.status).toBe(422);
     expect(res.body.error.details).toEqual([
       { line: 2, column: 'well', message: 'no well named or numbered "NOPE-9" in this team; import its header first' },
       { line: 3, column: 'value', message: '9000 sg at 1000 m TVD is an EMW of 9000.00 sg — outside 0.5–3.0 sg; is the unit right?' },
     ]);
+    expect(await counts()).toEqual(before);
+  });
+
+  it('re-imports a pressure file as an update without duplicating its observations', async () => {
+    const before = await counts();
+    const again = await post('pressures-mixed.csv', 'pressures');
+    expect(again.status).toBe(409);
+    const update = await post('pressures-mixed.csv', 'pressures', { onDuplicate: 'update' });
+    expect(update.status).toBe(201);
+    expect(update.body.outcome).toMatchObject({ created: 4, replaced: 4 });
+    expect((await counts()).pressures).toBe(before.pressures);
+    // and a second update still leaves one import's worth
+    await post('pressures-mixed.csv', 'pressures', { onDuplicate: 'update' });
+    expect((await counts()).pressures).toBe(before.pressures);
+  });
+
+  it('names an unknown chosen unit for a column, with its column, and writes nothing', async () => {
+    const before = await counts();
+    const csv = Buffer.from('well,kind,md,value\nTEST-1,kick,1000,1.2\n');
+    const res = await post('bad-unit.csv', 'pressures', { units: JSON.stringify({ md: 'furlong', value: 'atm' }) }, csv);
+    expect(res.status).toBe(422);
+    expect(res.body.error.details).toEqual([
+      { line: 1, column: 'md', message: 'unit "furlong" is not one of m, ft' },
+      { line: 1, column: 'value', message: 'unit "atm" is not one of psi, kPa, MPa, bar, Pa, ppg, sg, g/cc, kg/m3, psi/ft, kPa/m' },
+    ]);
+    expect(await counts()).toEqual(before);
+  });
+
+  it('names an unknown unit given row by row, with its line, and writes nothing', async () => {
+    const before = await counts();
+    const csv = Buffer.from('well,kind,md (m),value,UoM\nTEST-1,kick,1000,1.2,sg\nTEST-1,kick,1100,1.3,stone/ft\n');
+    const res = await post('bad-row-unit.csv', 'pressures', {}, csv);
+    expect(res.status).toBe(422);
+    expect(res.body.error.details).toEqual([
+      { line: 3, column: 'UoM', message: "unit 'stone/ft' is not one of psi, kPa, MPa, bar, Pa, ppg, sg, g/cc, kg/m3, psi/ft, kPa/m" },
+    ]);
+    expect(await counts()).toEqual(before);
+  });
+
+  it('reports every bad survey row by line and column, and writes nothing', async () => {
+    const before = await counts();
+    const res = await post('survey-bad.csv', 'surveys');
+    expect(res.status).toBe(422);
+    expect(res.body.error.details).toEqual([
+      { line: 3, column: 'inc', message: 'inclination 200 is outside 0..180°' },
+      { line: 5, column: 'azi', message: 'azimuth 360 is outside 0..360°' },
+      { line: 6, column: 'inc', message: "'x' is not a number" },
+      { line: 7, column: 'well', message: 'no well named or numbered "GHOST-7" in this team; import its header first' },
+      { line: 8, column: 'md (m)', message: 'a second station at MD 500 m for well "TEST-1" (also line 4)' },
+    ]);
+    expect(await counts()).toEqual(before);
   });
 
   it('reports progress for an import run as a job', async () => {
@@ -211,6 +286,56 @@ describe('surveys and pressures', () => {
     expect(job.phase).toBe('finished');
     expect(job.total).toBe(3001);
     expect(job.result.outcome.created).toBe(3001);
+  });
+});
+
+describe('formation tops', () => {
+  it('imports tops in feet, with TVD from the survey where the well has one', async () => {
+    const before = await counts();
+    const res = await post('tops-good.csv', 'tops');
+    expect(res.status).toBe(201);
+    expect(res.body.csv.units.md).toBe('ft');
+    expect(res.body.outcome).toMatchObject({ created: 4 });
+    expect((await counts()).tops).toBe(before.tops + 4);
+    const id = async (q: string) => (await team.agent.get(`/api/teams/${team.teamId}/wells?q=${encodeURIComponent(q)}`)).body.items[0].id;
+    const one = (await team.agent.get(`/api/teams/${team.teamId}/wells/${await id('TEST-1')}`)).body;
+    // 1 ft = 0.3048 m exactly (International Yard and Pound Agreement, 1959); TEST-1 has no survey, so TVD = MD.
+    expect(one.tops.map((t: { name: string; mdM: number; tvdM: number }) => [t.name, t.mdM, t.tvdM])).toEqual([
+      ['Seabed Clay', expect.closeTo(600 * 0.3048, 9), expect.closeTo(600 * 0.3048, 9)],
+      ['Harrow Sand', expect.closeTo(6560 * 0.3048, 9), expect.closeTo(6560 * 0.3048, 9)],
+    ]);
+    expect(one.tops[0].lithology).toBe('claystone');
+    const twoId = await id('TEST-2');
+    const two = (await team.agent.get(`/api/teams/${team.teamId}/wells/${twoId}`)).body;
+    const stations = (await team.agent.get(`/api/teams/${team.teamId}/wells/${twoId}/surveys`)).body;
+    // 5000 ft = 1524 m MD lies in the build from 1500 m to 2000 m MD: its TVD falls between those stations' TVDs.
+    expect(two.tops[0].tvdM).toBeGreaterThan(stations[3].tvdM);
+    expect(two.tops[0].tvdM).toBeLessThan(stations[4].tvdM);
+  });
+
+  it('re-imports a tops file as an update without duplicating the tops', async () => {
+    const before = await counts();
+    const res = await post('tops-good.csv', 'tops', { onDuplicate: 'update' });
+    expect(res.status).toBe(201);
+    expect(res.body.outcome).toMatchObject({ created: 4, replaced: 4 });
+    expect(await counts()).toEqual({ ...before, uploads: before.uploads + 1 });
+  });
+
+  it('reports every bad tops row by line and column, and writes nothing', async () => {
+    const before = await counts();
+    const res = await post('tops-bad.csv', 'tops');
+    expect(res.status).toBe(422);
+    expect(res.body.error.details).toEqual([
+      { line: 3, column: 'well', message: 'no well named or numbered "NOPE-1" in this team; import its header first' },
+      { line: 4, column: 'top', message: 'Top name is required' },
+      { line: 5, column: 'md (m)', message: "'abc' is not a number" },
+      { line: 6, column: 'md (m)', message: 'measured depth cannot be negative' },
+      { line: 7, message: 'expected 3 fields, found 2' },
+    ]);
+    expect(await counts()).toEqual(before);
+    const preview = await post('tops-bad.csv', 'tops', { dryRun: 'true' });
+    expect(preview.body.invalidLines).toEqual([3, 4, 5, 6, 7]);
+    expect(preview.body.counts).toMatchObject({ records: 6, invalid: 5, valid: 1 });
   });
 });
 

@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { sql } from 'drizzle-orm';
+import proj4 from 'proj4';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { logCurves, wells } from '../../server/db/schema';
 import { freshTeamAgent, startTestApp, type TestContext } from './support/testApp';
@@ -28,6 +29,22 @@ const post = (name: string, fields: Record<string, string> = {}, bytes = las(nam
   for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
   return req.attach('file', bytes, name);
 };
+
+/** The minimal fixture renamed to a well the team does not have. */
+function unknownWell(name = 'OSPREY-9', uwi = '199999999999W599') {
+  return las('minimal-wrap-no-m.las').toString('utf8').replace('KESTREL-3 ', name.padEnd(10, ' ')).replace('100000000000W500', uwi);
+}
+
+/** Puts ~W items right after WELL (line 12), so they become lines 13 on; lines from '~PARAMETER INFORMATION' on become a ~P section before ~C. */
+function withWellItems(text: string, ...lines: string[]) {
+  const all = text.split('\n');
+  const well = all.findIndex((l) => l.startsWith(' WELL.'));
+  const params = lines.indexOf('~PARAMETER INFORMATION');
+  const wellItems = params < 0 ? lines : lines.slice(0, params);
+  all.splice(well + 1, 0, ...wellItems);
+  if (params >= 0) all.splice(all.findIndex((l) => l.startsWith('~CURVE')), 0, ...lines.slice(params));
+  return all.join('\n');
+}
 
 async function curveCount() {
   const r = await ctx.db.execute<{ n: number }>(sql`SELECT count(*)::int AS n FROM ${logCurves} l JOIN ${wells} w ON w.id = l.well_id WHERE w.team_id = ${team.teamId}`);
@@ -86,12 +103,93 @@ describe('LAS 2.0 import', () => {
     expect(await curveCount()).toBe(before);
   });
 
-  it('names the well it cannot match', async () => {
-    const text = las('minimal-wrap-no-m.las').toString('utf8').replace('KESTREL-3 ', 'OSPREY-9  ').replace('100000000000W500', '199999999999W599');
+  it('re-imports the same file as an update without duplicating its curves', async () => {
+    const before = await curveCount();
+    const again = await post('minimal-wrap-no-m.las');
+    expect(again.status).toBe(409);
+    const res = await post('minimal-wrap-no-m.las', { onDuplicate: 'update' });
+    expect(res.status).toBe(201);
+    expect(res.body.outcome).toMatchObject({ created: 4, replaced: 4 });
+    expect(await curveCount()).toBe(before);
+  });
+
+  it('names the well it cannot match, and what the file lacks to create it', async () => {
+    const text = unknownWell();
     const res = await post('unknown.las', { dryRun: 'true' }, Buffer.from(text));
     expect(res.body.problems).toEqual([
-      { line: 12, column: 'WELL', message: 'no well "OSPREY-9" or UWI/API "199999999999W599" in this team; import the well header first or choose the well' },
+      {
+        line: 12,
+        column: 'WELL',
+        message:
+          'no well named "OSPREY-9" or with UWI/API "199999999999W599" in this team, and the file has no LATI/LONG (or X/Y) in ~W or ~P to create it; import the well header first or choose the well',
+      },
     ]);
+    const half = await post('half.las', { dryRun: 'true' }, Buffer.from(withWellItems(text, ' LATI.DEG        -32.61                       : LATITUDE')));
+    expect(half.body.problems).toEqual([
+      {
+        line: 12,
+        column: 'WELL',
+        message: 'no well named "OSPREY-9" or with UWI/API "199999999999W599" in this team, and the file has LATI but no LONG to create it; import the well header first or choose the well',
+      },
+    ]);
+  });
+
+  it('creates the well from WELL, UWI and LATI/LONG when none matches, saying so in the preview', async () => {
+    const text = withWellItems(
+      unknownWell(),
+      ' LATI.DEG        32 36 36.0 S                 : LATITUDE',
+      ' LONG.DEG        -101.215                     : LONGITUDE',
+      '~PARAMETER INFORMATION',
+      ' EKB .FT         82.0                         : KELLY BUSHING ELEVATION',
+    );
+    const before = await curveCount();
+    const preview = await post('osprey.las', { dryRun: 'true' }, Buffer.from(text));
+    expect(preview.body.problems).toEqual([]);
+    // 32° 36′ 36″ = 32 + 36/60 + 36/3600 = 32.61° (ISO 6709 sexagesimal degrees); 82 ft × 0.3048 m/ft exactly.
+    expect(preview.body.las.plan.createWell).toMatchObject({ name: 'OSPREY-9', uwi: '199999999999W599', lon: -101.215, surfaceEpsg: 4326, datumKind: 'KB', operator: 'SYNTHETIC SURVEY CO' });
+    expect(preview.body.las.plan.createWell.lat).toBeCloseTo(-32.61, 12);
+    expect(preview.body.las.plan.createWell.datumElevationM).toBeCloseTo(82 * 0.3048, 12);
+    expect(preview.body.counts).toMatchObject({ createWell: 1, valid: 4 });
+    expect(preview.body.notes[0]).toEqual({
+      line: 12,
+      column: 'WELL',
+      message: 'no well "OSPREY-9" or UWI/API "199999999999W599" in this team: the import creates it at lon -101.21500, lat -32.61000 from LATI/LONG (lines 13, 14)',
+    });
+    expect((await team.agent.get(`${base}/wells?q=OSPREY-9`)).body.total).toBe(0);
+
+    const res = await post('osprey.las', {}, Buffer.from(text));
+    expect(res.status).toBe(201);
+    expect(res.body.outcome).toMatchObject({ created: 4, wellCreated: true });
+    const list = (await team.agent.get(`${base}/wells?q=OSPREY-9`)).body;
+    expect(list.total).toBe(1);
+    expect(list.items[0]).toMatchObject({ name: 'OSPREY-9', uwi: '199999999999W599' });
+    expect(list.items[0].lon).toBeCloseTo(-101.215, 9);
+    expect(list.items[0].lat).toBeCloseTo(-32.61, 9);
+    expect(await curveCount()).toBe(before + 4);
+    // The same file again as an update now matches the created well by UWI and replaces its curves.
+    const update = await post('osprey.las', { onDuplicate: 'update' }, Buffer.from(text));
+    expect(update.body.las.plan.matchedBy).toBe('uwi');
+    expect(await curveCount()).toBe(before + 4);
+    expect((await team.agent.get(`${base}/wells?q=OSPREY-9`)).body.total).toBe(1);
+  });
+
+  it('creates the well from X/Y only with the EPSG code the user gives', async () => {
+    const text = withWellItems(unknownWell('HERON-2', '188888888888W588'), ' X   .M          500000                       : EASTING', ' Y   .M          6400000                      : NORTHING');
+    const bare = await post('heron.las', { dryRun: 'true' }, Buffer.from(text));
+    expect(bare.body.problems).toEqual([{ line: 13, column: 'X', message: 'the file gives X/Y but no LATI/LONG: choose the EPSG code of X/Y to create well "HERON-2"' }]);
+    const res = await post('heron.las', { dryRun: 'true', epsg: '32713' }, Buffer.from(text));
+    expect(res.body.problems).toEqual([]);
+    // Reference: proj4 itself, the library the import converts with.
+    const [lon, lat] = proj4('+proj=utm +zone=13 +south +datum=WGS84 +units=m +no_defs', 'EPSG:4326', [500000, 6400000]);
+    expect(res.body.las.plan.createWell).toMatchObject({ surfaceX: 500000, surfaceY: 6400000, surfaceEpsg: 32713 });
+    expect(res.body.las.plan.createWell.lon).toBeCloseTo(lon, 9);
+    expect(res.body.las.plan.createWell.lat).toBeCloseTo(lat, 9);
+    // Swapped X/Y are refused, saying they may be swapped.
+    const swapped = withWellItems(unknownWell('HERON-2', '188888888888W588'), ' X   .M          6400000                      : EASTING', ' Y   .M          500000                       : NORTHING');
+    const bad = await post('heron-swapped.las', { dryRun: 'true', epsg: '32713' }, Buffer.from(swapped));
+    expect(bad.body.problems).toHaveLength(1);
+    expect(bad.body.problems[0]).toMatchObject({ line: 13, column: 'X' });
+    expect(bad.body.problems[0].message).toMatch(/are easting and northing swapped/);
   });
 
   it('warns about a NULL value that the file does not use', async () => {

@@ -106,7 +106,7 @@ export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEp
     let lonLat: { lon: number; lat: number } | null = null;
     if (epsg === 4326) {
       const message = checkLonLat(x, y);
-      if (message) lineProblems.push({ line: r.line, column: 'x', message });
+      if (message) lineProblems.push({ line: r.line, column: message.startsWith('latitude') ? 'y' : 'x', message });
       else lonLat = { lon: x, lat: y };
     } else {
       try {

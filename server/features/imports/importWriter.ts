@@ -2,7 +2,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import type { LasFile } from '../../../shared/formats/las';
 import { computeSurvey } from '../../../shared/trajectory';
 import type { Db } from '../../db/client';
-import { formationTops, logCurves, pressureObservations, surveyStations } from '../../db/schema';
+import { formationTops, logCurves, pressureObservations, surveyStations, wells } from '../../db/schema';
 import { bulkInsert, bulkUpdate, type BulkColumn } from '../../lib/bulkInsert';
 import { ewktPoint } from '../../db/schema/geometry';
 import type { PressurePlanRow, SurveyPlan, TopPlanRow, WellPlanRow } from './csvPlans';
@@ -144,8 +144,50 @@ export async function writeTops(tx: Tx, uploadId: string, rows: TopPlanRow[], pr
   return { created: rows.length };
 }
 
-/** Each curve becomes one row with its MD index; NULL samples are stored as SQL NULL. */
-export async function writeLasCurves(tx: Tx, uploadId: string, las: LasFile, plan: LasPlan, progress: Progress) {
+/**
+ * Deletes the observations, tops and log curves that the given uploads wrote, so a re-import chosen
+ * as "update" replaces them. Wells are updated in place by name/UWI and surveys are replaced per well
+ * by their own writers, so neither is deleted here (other data of the team may hang on a well).
+ */
+export async function removeRowsOfUploads(tx: Tx, uploadIds: string[]): Promise<number> {
+  if (uploadIds.length === 0) return 0;
+  let removed = 0;
+  for (const table of [pressureObservations, formationTops, logCurves] as const) {
+    removed += (await tx.delete(table).where(inArray(table.uploadId, uploadIds)).returning({ id: table.id })).length;
+  }
+  return removed;
+}
+
+/**
+ * Each curve becomes one row with its MD index; NULL samples are stored as SQL NULL. A well the plan
+ * creates is inserted first, in the same transaction, with this upload as its provenance.
+ */
+export async function writeLasCurves(tx: Tx, teamId: string, userId: string, uploadId: string, las: LasFile, plan: LasPlan, progress: Progress) {
+  let wellId = plan.well?.id;
+  const nw = plan.createWell;
+  if (!wellId && nw) {
+    const [created] = await tx
+      .insert(wells)
+      .values({
+        teamId,
+        name: nw.name,
+        uwi: nw.uwi,
+        operator: nw.operator,
+        location: ewktPoint(nw.lon, nw.lat),
+        surfaceX: nw.surfaceX,
+        surfaceY: nw.surfaceY,
+        surfaceEpsg: nw.surfaceEpsg,
+        ...(nw.datumElevationM !== null && nw.datumKind ? { datumElevationM: nw.datumElevationM, datumKind: nw.datumKind } : {}),
+        groundElevationM: nw.groundElevationM,
+        createdUploadId: uploadId,
+        updatedUploadId: uploadId,
+        createdBy: userId,
+        updatedBy: userId,
+      })
+      .returning({ id: wells.id });
+    wellId = created.id;
+  }
+  if (!wellId) throw new Error('writeLasCurves: the plan has neither a well nor a well to create');
   const md = Array.from(las.index.valuesM);
   const header = {
     version: las.version,
@@ -160,7 +202,7 @@ export async function writeLasCurves(tx: Tx, uploadId: string, las: LasFile, pla
     const p = plan.curves.find((x) => x.mnemonic === c.mnemonic)!;
     const values = Array.from(c.values, (v) => (Number.isNaN(v) ? null : v)) as number[];
     await tx.insert(logCurves).values({
-      wellId: plan.well!.id,
+      wellId,
       mnemonic: c.mnemonic,
       unit: c.unit,
       description: c.description,
@@ -174,5 +216,5 @@ export async function writeLasCurves(tx: Tx, uploadId: string, las: LasFile, pla
     });
     progress('writing log curves', ++done, las.curves.length);
   }
-  return { created: las.curves.length };
+  return { created: las.curves.length, wellCreated: !plan.well && !!nw };
 }

@@ -12,7 +12,7 @@ import { uploads, wells } from '../../db/schema';
 import { HttpError, badRequest, conflict, notFound } from '../../lib/httpError';
 import { planPressures, planSurveys, planTops, planWells } from './csvPlans';
 import type { Progress } from '../../lib/jobs';
-import { writeLasCurves, writePressures, writeSurveys, writeTops, writeWells } from './importWriter';
+import { removeRowsOfUploads, writeLasCurves, writePressures, writeSurveys, writeTops, writeWells } from './importWriter';
 import { planLas, type LasPlan } from './lasPlan';
 import { WellLookup, loadSurveys } from './wellLookup';
 
@@ -89,12 +89,15 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
   progress('checking rows', 0, csv.rows.length);
   const mapped = mapCsvRows(csv, kind, mapping, units);
   const problems = [...csv.problems, ...mapped.problems];
-  const invalidLines = [...mapped.invalidLines];
+  // Ragged records never reach the mapping, but they are skipped lines all the same.
+  const invalidLines = [...csv.raggedLines, ...mapped.invalidLines];
+  // The planners speak of fields ('x', 'md'); the user knows the columns by the file's own header.
+  const inFileTerms = (list: Problem[]) => list.map((x) => (x.column && mapped.columnOfField[x.column] ? { ...x, column: mapped.columnOfField[x.column] } : x));
   const columns = csv.header.map((name) => ({ name, field: mapping[name] ?? null, ...(matches.find((m) => m.column === name)?.unit ? { unit: matches.find((m) => m.column === name)!.unit } : {}) }));
   const base = {
     warnings: [] as Problem[],
     notes: [] as Problem[],
-    totalRecords: csv.rows.length,
+    totalRecords: csv.rows.length + csv.raggedLines.length,
     csv: { delimiter: csv.delimiter, decimalComma: csv.decimalComma, encoding, columns, units },
   };
   const needsSurveys = kind === 'pressures' || kind === 'tops';
@@ -106,7 +109,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
     const p = planWells(mapped.records, lookup, req.epsg);
     return {
       ...base,
-      problems: [...problems, ...p.problems],
+      problems: [...problems, ...inFileTerms(p.problems)],
       invalidLines: [...invalidLines, ...p.invalidLines],
       preview: p.rows.slice(0, PREVIEW_ROWS).map((r) => ({ ...r, action: r.existingId ? 'update' : 'create' })),
       counts: { valid: p.rows.length, create: p.rows.filter((r) => !r.existingId).length, update: p.rows.filter((r) => r.existingId).length },
@@ -118,7 +121,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
     const stations = p.rows.reduce((n, s) => n + s.stations.length, 0);
     return {
       ...base,
-      problems: [...problems, ...p.problems],
+      problems: [...problems, ...inFileTerms(p.problems)],
       invalidLines: [...invalidLines, ...p.invalidLines],
       preview: p.rows.flatMap((s) => s.stations.map((st, i) => ({ line: s.lines[i], well: s.wellName, ...st }))).slice(0, PREVIEW_ROWS),
       counts: { valid: stations, wells: p.rows.length },
@@ -129,7 +132,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
     const p = planPressures(mapped.records, lookup, surveys);
     return {
       ...base,
-      problems: [...problems, ...p.problems],
+      problems: [...problems, ...inFileTerms(p.problems)],
       invalidLines: [...invalidLines, ...p.invalidLines],
       preview: p.rows.slice(0, PREVIEW_ROWS).map(({ wellId: _id, ...r }) => r),
       counts: { valid: p.rows.length },
@@ -139,7 +142,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
   const p = planTops(mapped.records, lookup, surveys);
   return {
     ...base,
-    problems: [...problems, ...p.problems],
+    problems: [...problems, ...inFileTerms(p.problems)],
     invalidLines: [...invalidLines, ...p.invalidLines],
     preview: p.rows.slice(0, PREVIEW_ROWS).map(({ wellId: _id, ...r }) => r),
     counts: { valid: p.rows.length },
@@ -155,29 +158,30 @@ async function planLasFile(db: Db, req: ImportRequest, las: LasFile, lookup: Wel
     chosen = w;
   }
   const roles = Object.fromEntries(Object.entries(req.mapping ?? {}).filter((e): e is [string, string] => typeof e[1] === 'string'));
-  const { plan: p, problems } = planLas(las, lookup, chosen, roles);
+  const { plan: p, problems, notes } = planLas(las, lookup, chosen, roles, req.epsg);
   return {
     problems,
     warnings: las.warnings,
-    notes: las.notes,
+    notes: [...notes, ...las.notes],
     totalRecords: las.index.values.length,
     // A LAS file imports whole or not at all: a broken file has no "valid rows" to keep.
     invalidLines: problems.map((x) => x.line),
     preview: p.curves.map((c) => ({ ...c })),
-    counts: { valid: problems.length ? 0 : p.curves.length, curves: p.curves.length, samples: las.index.values.length },
+    counts: { valid: problems.length ? 0 : p.curves.length, curves: p.curves.length, samples: las.index.values.length, createWell: p.createWell ? 1 : 0 },
     las: { plan: p, version: las.version, wrap: las.wrap },
-    write: (tx, uploadId, pr) => writeLasCurves(tx, uploadId, las, p, pr),
+    write: (tx, uploadId, pr) => writeLasCurves(tx, req.teamId, req.userId, uploadId, las, p, pr),
   };
 }
 
+/** The latest earlier upload of the same bytes, and the ids of every earlier upload of them. */
 async function findDuplicate(db: Db, teamId: string, hash: string) {
-  const [dup] = await db
+  const earlier = await db
     .select({ uploadId: uploads.id, fileName: uploads.fileName, createdAt: uploads.createdAt })
     .from(uploads)
     .where(and(eq(uploads.teamId, teamId), eq(uploads.sha256, hash)))
-    .orderBy(desc(uploads.createdAt))
-    .limit(1);
-  return dup ? { ...dup, createdAt: dup.createdAt.toISOString() } : null;
+    .orderBy(desc(uploads.createdAt));
+  const [dup] = earlier;
+  return dup ? { ...dup, createdAt: dup.createdAt.toISOString(), allUploadIds: earlier.map((u) => u.uploadId) } : null;
 }
 
 /**
@@ -187,8 +191,11 @@ async function findDuplicate(db: Db, teamId: string, hash: string) {
 export async function runImport(db: Db, req: ImportRequest, progress: Progress = () => {}) {
   const hash = sha256(req.bytes);
   const planned = await plan(db, req, progress);
-  const duplicateOf = await findDuplicate(db, req.teamId, hash);
+  const duplicate = await findDuplicate(db, req.teamId, hash);
+  const duplicateOf = duplicate && { uploadId: duplicate.uploadId, fileName: duplicate.fileName, createdAt: duplicate.createdAt };
   const invalidLines = [...new Set(planned.invalidLines)].sort((a, b) => a - b);
+  // In the order a person reads the file (stable, so one line's problems keep their order).
+  planned.problems = planned.problems.map((p, i) => ({ p, i })).sort((a, b) => a.p.line - b.p.line || a.i - b.i).map(({ p }) => p);
   const summary = {
     kind: req.kind,
     fileName: req.fileName,
@@ -230,9 +237,12 @@ export async function runImport(db: Db, req: ImportRequest, progress: Progress =
         uploadedBy: req.userId,
       })
       .returning({ id: uploads.id });
+    // "Update" means the file's rows replace what its earlier uploads wrote, in this same transaction.
+    const replaced = duplicate && req.onDuplicate === 'update' ? await removeRowsOfUploads(tx, duplicate.allUploadIds) : 0;
     const written = await planned.write(tx, upload.id, progress);
     const result = {
       ...written,
+      replaced,
       skippedLines: invalidLines,
       skippedProblems: planned.problems.slice(0, 1000),
       reimportOf: duplicateOf?.uploadId ?? null,

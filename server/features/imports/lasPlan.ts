@@ -1,5 +1,6 @@
+import { checkLonLat, toLonLat } from '../../../shared/geo/crs';
 import type { LasFile } from '../../../shared/formats/las';
-import { suggestCurveRole } from '../../../shared/formats/las';
+import { readLasLocation, suggestCurveRole } from '../../../shared/formats/las';
 import type { Problem } from '../../../shared/formats/problem';
 import { CURVE_ROLES, type CurveRole } from '../../../shared/schemas/wells';
 import type { KnownWell, WellLookup } from './wellLookup';
@@ -14,8 +15,27 @@ export interface LasCurvePlan {
   validSamples: number;
 }
 
+/** The well a LAS file creates when no well of the team matches it, from its own ~W/~P items. */
+export interface LasNewWell {
+  name: string;
+  uwi: string | null;
+  operator: string | null;
+  lon: number;
+  lat: number;
+  surfaceX: number;
+  surfaceY: number;
+  surfaceEpsg: number;
+  datumElevationM: number | null;
+  datumKind: 'KB' | 'DF' | null;
+  groundElevationM: number | null;
+  /** Where the location came from, e.g. "LATI/LONG (lines 14, 15)". */
+  locationFrom: string;
+}
+
 export interface LasPlan {
   well: KnownWell | null;
+  /** Set when no well matches and the file says enough to create one; the commit creates it. */
+  createWell: LasNewWell | null;
   wellLabel: string;
   /** How the well was matched: by the chosen id, the UWI/API, or the WELL name. */
   matchedBy: 'chosen' | 'uwi' | 'name' | null;
@@ -30,11 +50,76 @@ function headerLine(las: LasFile, mnemonic: string): number {
 }
 
 /**
- * Matches the LAS file to a well of the team (chosen id, then UWI/API, then WELL name) and settles
- * each curve's role (as the user mapped it, else suggested from mnemonic and unit).
+ * The well to create from the file's name, UWI/API and location (LATI/LONG, else X/Y in `epsg`), or
+ * the reason it cannot be created, naming what is missing.
  */
-export function planLas(las: LasFile, lookup: WellLookup, chosen: KnownWell | null, roles: Record<string, string>): { plan: LasPlan; problems: Problem[] } {
+function newWellFrom(las: LasFile, uwi: string, epsg: number): { well: LasNewWell | null; problems: Problem[]; missing: string | null } {
+  const name = las.well.WELL.trim();
+  const loc = readLasLocation(las);
+  const problems: Problem[] = [...loc.problems];
+  if (!name) return { well: null, problems, missing: 'the file has no WELL name in ~W to create it under' };
+  let at: { lon: number; lat: number; x: number; y: number; epsg: number; from: string } | null = null;
+  if (loc.lat && loc.lon) {
+    const message = checkLonLat(loc.lon.value, loc.lat.value);
+    if (message) problems.push({ line: (message.startsWith('latitude') ? loc.lat : loc.lon).line, column: (message.startsWith('latitude') ? loc.lat : loc.lon).mnemonic, message });
+    else {
+      // Other geodetic datums differ from WGS 84 by up to a few hundred metres: fine for screening, worth saying.
+      const datum = loc.geodeticDatum && !/WGS\s*-?\s*84/i.test(loc.geodeticDatum) ? `, read as WGS 84 although GDAT says "${loc.geodeticDatum}"` : '';
+      at = { lon: loc.lon.value, lat: loc.lat.value, x: loc.lon.value, y: loc.lat.value, epsg: 4326, from: `${loc.lat.mnemonic}/${loc.lon.mnemonic} (lines ${loc.lat.line}, ${loc.lon.line})${datum}` };
+    }
+  } else if (loc.x && loc.y && !loc.lat && !loc.lon) {
+    // The LAS header does not name the CRS of X/Y, so only the user's EPSG code can place them.
+    if (epsg === 4326) {
+      problems.push({ line: loc.x.line, column: loc.x.mnemonic, message: `the file gives ${loc.x.mnemonic}/${loc.y.mnemonic} but no LATI/LONG: choose the EPSG code of ${loc.x.mnemonic}/${loc.y.mnemonic} to create well "${name}"` });
+    } else {
+      try {
+        const ll = toLonLat(loc.x.value, loc.y.value, epsg);
+        at = { ...ll, x: loc.x.value, y: loc.y.value, epsg, from: `${loc.x.mnemonic}/${loc.y.mnemonic} in EPSG:${epsg} (lines ${loc.x.line}, ${loc.y.line})` };
+      } catch (err) {
+        problems.push({ line: loc.x.line, column: loc.x.mnemonic, message: (err as Error).message });
+      }
+    }
+  }
+  if (!at) {
+    if (problems.length) return { well: null, problems, missing: null };
+    const one = loc.lat ?? loc.lon ?? loc.x ?? loc.y;
+    const other = loc.lat ? 'LONG' : loc.lon ? 'LATI' : loc.x ? 'Y' : 'X';
+    return { well: null, problems, missing: one ? `the file has ${one.mnemonic} but no ${other} to create it` : 'the file has no LATI/LONG (or X/Y) in ~W or ~P to create it' };
+  }
+  return {
+    well: {
+      name,
+      uwi: uwi || null,
+      operator: las.well.COMP.trim() || null,
+      lon: at.lon,
+      lat: at.lat,
+      surfaceX: at.x,
+      surfaceY: at.y,
+      surfaceEpsg: at.epsg,
+      datumElevationM: loc.datumElevation?.value ?? null,
+      datumKind: loc.datumElevation?.kind ?? null,
+      groundElevationM: loc.groundElevation?.value ?? null,
+      locationFrom: at.from,
+    },
+    problems,
+    missing: null,
+  };
+}
+
+/**
+ * Matches the LAS file to a well of the team (chosen id, then UWI/API, then WELL name), else plans to
+ * create it from the file's header, and settles each curve's role (as the user mapped it, else
+ * suggested from mnemonic and unit). `epsg` is the CRS of X/Y when the file gives no LATI/LONG.
+ */
+export function planLas(
+  las: LasFile,
+  lookup: WellLookup,
+  chosen: KnownWell | null,
+  roles: Record<string, string>,
+  epsg = 4326,
+): { plan: LasPlan; problems: Problem[]; notes: Problem[] } {
   const problems: Problem[] = [...las.errors];
+  const notes: Problem[] = [];
   let well: KnownWell | null = chosen;
   let matchedBy: LasPlan['matchedBy'] = chosen ? 'chosen' : null;
   const uwi = (las.well.UWI || las.well.API).trim();
@@ -47,12 +132,24 @@ export function planLas(las: LasFile, lookup: WellLookup, chosen: KnownWell | nu
     if (well) matchedBy = 'name';
   }
   const wellLabel = las.well.WELL.trim() || uwi || '(no WELL in ~W)';
+  let createWell: LasNewWell | null = null;
   if (!well) {
-    problems.push({
-      line: headerLine(las, las.well.WELL ? 'WELL' : 'UWI'),
-      column: 'WELL',
-      message: `no well "${wellLabel}"${uwi ? ` or UWI/API "${uwi}"` : ''} in this team; import the well header first or choose the well`,
-    });
+    const created = newWellFrom(las, uwi, epsg);
+    createWell = created.well;
+    problems.push(...created.problems);
+    if (createWell) {
+      notes.push({
+        line: headerLine(las, 'WELL'),
+        column: 'WELL',
+        message: `no well "${createWell.name}"${uwi ? ` or UWI/API "${uwi}"` : ''} in this team: the import creates it at lon ${createWell.lon.toFixed(5)}, lat ${createWell.lat.toFixed(5)} from ${createWell.locationFrom}`,
+      });
+    } else if (created.missing) {
+      problems.push({
+        line: headerLine(las, las.well.WELL ? 'WELL' : 'UWI'),
+        column: 'WELL',
+        message: `no well named "${wellLabel}"${uwi ? ` or with UWI/API "${uwi}"` : ''} in this team, and ${created.missing}; import the well header first or choose the well`,
+      });
+    }
   }
   const curves: LasCurvePlan[] = las.curves.map((c) => {
     const suggestedRole = suggestCurveRole(c.mnemonic, c.unit);
@@ -70,6 +167,7 @@ export function planLas(las: LasFile, lookup: WellLookup, chosen: KnownWell | nu
   const md = las.index.valuesM;
   const plan: LasPlan = {
     well,
+    createWell,
     wellLabel,
     matchedBy,
     indexUnit: las.index.rawUnit,
@@ -77,5 +175,5 @@ export function planLas(las: LasFile, lookup: WellLookup, chosen: KnownWell | nu
     baseMdM: md.length ? md[md.length - 1] : NaN,
     curves,
   };
-  return { plan, problems };
+  return { plan, problems, notes };
 }

@@ -15,14 +15,14 @@ import type { CsvFile, CsvParseOptions, CsvRow } from './types';
  *
  * @example
  * const csv = parseCsv('md;pp\n1000,5;12,3\n');
- * // → { delimiter: ';', decimalComma: true, header: ['md', 'pp'], rows: [{ line: 2, cells: ['1000,5', '12,3'] }], problems: [] }
+ * // → { delimiter: ';', decimalComma: true, header: ['md', 'pp'], rows: [{ line: 2, cells: ['1000,5', '12,3'] }], raggedLines: [], problems: [] }
  */
 export function parseCsv(input: string | Uint8Array, options: CsvParseOptions = {}): CsvFile {
   let text: string;
   try {
     text = typeof input === 'string' ? input : decodeText(input).text;
   } catch {
-    return { delimiter: options.delimiter ?? ',', decimalComma: false, header: [], rows: [], problems: [{ line: 1, message: BINARY_FILE_MESSAGE }] };
+    return { delimiter: options.delimiter ?? ',', decimalComma: false, header: [], rows: [], raggedLines: [], problems: [{ line: 1, message: BINARY_FILE_MESSAGE }] };
   }
   if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
 
@@ -31,19 +31,23 @@ export function parseCsv(input: string | Uint8Array, options: CsvParseOptions = 
   const records = readRecords(text, delimiter, problems);
   if (records.length === 0) {
     problems.add(1, 'the file holds no header and no data');
-    return { delimiter, decimalComma: false, header: [], rows: [], problems: problems.finish() };
+    return { delimiter, decimalComma: false, header: [], rows: [], raggedLines: [], problems: problems.finish() };
   }
 
   const headerRecord = records[0];
   const header = nameColumns(headerRecord, problems);
   const rows: CsvRow[] = [];
+  const raggedLines: number[] = [];
   for (let r = 1; r < records.length; r++) {
     const record = records[r];
     if (record.cells.length === header.length) rows.push(record);
-    else problems.add(record.line, `expected ${header.length} fields, found ${record.cells.length}`);
+    else {
+      problems.add(record.line, `expected ${header.length} fields, found ${record.cells.length}`);
+      raggedLines.push(record.line);
+    }
   }
   const decimalComma = options.decimalComma ?? detectDecimalComma(rows, delimiter);
-  return { delimiter, decimalComma, header, rows, problems: problems.finish() };
+  return { delimiter, decimalComma, header, rows, raggedLines, problems: problems.finish() };
 }
 
 /** Trimmed names; empty ones get "column N" and repeats name:1, name:2 so that every column has a unique key. */

@@ -23,5 +23,7 @@ export interface CsvFile {
   header: string[];
   /** Data records with as many cells as the header; ragged records are left out and reported. */
   rows: CsvRow[];
+  /** Lines of the ragged records left out of `rows`, so that they count as skipped records. */
+  raggedLines: number[];
   problems: Problem[];
 }

@@ -54,6 +54,7 @@ describe('parseCsv', () => {
     ]);
     // Lines 5 (empty), 8 (spaces) and 11 (delimiters only) are blank.
     expect(csv.rows.map((r) => r.line)).toEqual([2, 3, 4, 6, 7, 9, 10, 12, 13, 15]);
+    expect(csv.raggedLines).toEqual([14, 16]);
   });
 
   it('drops a UTF-8 BOM, from bytes and from text', () => {
