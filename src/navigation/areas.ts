@@ -75,7 +75,7 @@ export const AREAS: readonly Area[] = [
     key: 'outbox',
     path: '/outbox',
     label: 'Mail outbox',
-    summary: 'Mails this demo would have sent: invitations and password resets.',
+    summary: 'Invitations this team sent, as the local mail fake received them (password-reset mail is never shown here).',
     action: 'outbox.read',
     section: 'admin',
   },
