@@ -38,6 +38,8 @@ const lasFactsSchema = z.object({
     well: z.object({ id: z.string(), name: z.string(), uwi: z.string().nullable() }).nullable(),
     wellLabel: z.string(),
     matchedBy: z.enum(['chosen', 'uwi', 'name']).nullable(),
+    // Set when no well matches and the file's header places one: the commit creates it.
+    createWell: z.object({ name: z.string(), uwi: z.string().nullable(), lon: z.number(), lat: z.number(), locationFrom: z.string() }).nullable().optional(),
     indexUnit: z.string(),
     // NaN for a file without samples, which JSON carries as null.
     topMdM: z.number().nullable(),

@@ -165,4 +165,9 @@ describe('outcomeSummary', () => {
     expect(outcomeSummary('las', { created: 4, skippedLines: [] })).toBe('4 log curves');
     expect(outcomeSummary('pressures', {})).toBe('no outcome recorded');
   });
+
+  it('says when a LAS import created its well and when an update replaced earlier rows', () => {
+    expect(outcomeSummary('las', { created: 4, wellCreated: true, replaced: 0, skippedLines: [] })).toBe('4 log curves into a well created from the file');
+    expect(outcomeSummary('pressures', { created: 4, replaced: 4, skippedLines: [] })).toBe('4 pressure observations · 4 rows of the earlier import replaced');
+  });
 });

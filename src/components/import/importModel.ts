@@ -246,9 +246,10 @@ export function outcomeSummary(kind: ImportKind, outcome: Record<string, unknown
     surveys: `${plural(created, 'station')}${wells === null ? '' : ` for ${plural(wells, 'well')}`}`,
     pressures: `${plural(created, 'pressure observation')}`,
     tops: `${plural(created, 'formation top')}`,
-    las: `${plural(created, 'log curve')}`,
+    las: `${plural(created, 'log curve')}${outcome.wellCreated === true ? ' into a well created from the file' : ''}`,
   };
-  return skipped > 0 ? `${main[kind]} · ${plural(skipped, 'line')} skipped` : main[kind];
+  const replaced = typeof outcome.replaced === 'number' && outcome.replaced > 0 ? ` · ${plural(outcome.replaced, 'row')} of the earlier import replaced` : '';
+  return `${main[kind]}${replaced}${skipped > 0 ? ` · ${plural(skipped, 'line')} skipped` : ''}`;
 }
 
 /**
