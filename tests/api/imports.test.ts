@@ -235,11 +235,12 @@ describe('surveys and pressures', () => {
   it('names an unknown chosen unit for a column, with its column, and writes nothing', async () => {
     const before = await counts();
     const csv = Buffer.from('well,kind,md,value\nTEST-1,kick,1000,1.2\n');
-    const res = await post('bad-unit.csv', 'pressures', { units: JSON.stringify({ md: 'furlong', value: 'atm' }) }, csv);
+    const res = await post('bad-unit.csv', 'pressures', { units: JSON.stringify({ md: 'furlong', value: 'atm', depth: 'm' }) }, csv);
     expect(res.status).toBe(422);
     expect(res.body.error.details).toEqual([
       { line: 1, column: 'md', message: 'unit "furlong" is not one of m, ft' },
       { line: 1, column: 'value', message: 'unit "atm" is not one of psi, kPa, MPa, bar, Pa, ppg, sg, g/cc, kg/m3, psi/ft, kPa/m' },
+      { line: 1, column: 'depth', message: 'a unit was chosen for "depth", which is not a numeric field of a pressures import (md, tvd, value)' },
     ]);
     expect(await counts()).toEqual(before);
   });

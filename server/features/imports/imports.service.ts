@@ -89,6 +89,11 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
   progress('checking rows', 0, csv.rows.length);
   const mapped = mapCsvRows(csv, kind, mapping, units);
   const problems = [...csv.problems, ...mapped.problems];
+  // A unit for a field that has none would otherwise be dropped without a word.
+  const numeric = fields.filter((f) => f.quantity).map((f) => f.key);
+  for (const key of Object.keys(req.units ?? {})) {
+    if (!numeric.includes(key)) problems.push({ line: 1, column: key, message: `a unit was chosen for "${key}", which is not a numeric field of a ${kind} import (${numeric.join(', ')})` });
+  }
   // Ragged records never reach the mapping, but they are skipped lines all the same.
   const invalidLines = [...csv.raggedLines, ...mapped.invalidLines];
   // The planners speak of fields ('x', 'md'); the user knows the columns by the file's own header.
