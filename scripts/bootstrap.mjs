@@ -11,7 +11,7 @@ import { readOrCreateSecret } from './setup/secrets.mjs';
 import { run, say, fail, ROOT } from './setup/proc.mjs';
 
 const mode = process.argv[2] ?? 'start';
-if (!['start', 'dev', 'test', 'seed', 'bench'].includes(mode)) fail(`Unknown mode "${mode}" (start, dev, test, seed, bench).`);
+if (!['start', 'dev', 'test', 'seed', 'bench', 'admin'].includes(mode)) fail(`Unknown mode "${mode}" (start, dev, test, seed, bench, admin).`);
 
 const tsx = join(ROOT, 'node_modules', '.bin', 'tsx');
 
@@ -72,7 +72,8 @@ async function runApp() {
   };
   const setupArgs = mode === 'seed' ? ['--demo', '--regenerate'] : [];
   await run(tsx, ['server/db/setup.ts', ...setupArgs], { env, label: 'database' });
-  if (mode === 'seed') {
+  if (mode === 'admin') await run(tsx, ['server/db/createAdmin.ts', ...process.argv.slice(3)], { env, label: 'first admin' });
+  if (mode === 'seed' || mode === 'admin') {
     cleanUp();
     return;
   }

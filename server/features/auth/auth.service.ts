@@ -11,7 +11,7 @@ import { hashLinkToken, newLinkToken } from './linkTokens';
 import type { SessionClaims, SessionGrant } from './sessionToken';
 
 const RESET_MINUTES = 60;
-const BCRYPT_ROUNDS = 10;
+export const BCRYPT_ROUNDS = 10;
 // Compared against when the user is unknown, so timing does not reveal which e-mails exist.
 const DUMMY_HASH = bcrypt.hashSync('porelith-no-such-user', BCRYPT_ROUNDS);
 
