@@ -72,7 +72,7 @@ export function deleteSurface(teamId: string, surfaceId: string, client: ApiClie
 }
 
 /**
- * The surface at a planned well's location (value and standard deviation, m); nulls outside the grid.
+ * The surface at a planned well's location (value and standard deviation in `unit`: m, kg/m3 or Pa); nulls outside the grid.
  * @example const { value, stdDev } = await plannedWellSurfaceValue(teamId, surfaceId, plannedWellId);
  */
 export function plannedWellSurfaceValue(teamId: string, surfaceId: string, plannedWellId: string, client: ApiClient = api): Promise<SurfacePointValue> {

@@ -5,7 +5,7 @@ import { listPlannedWells } from '@/api/planning';
 import { deleteSurface, getProspect, getSurface, listSurfaces, plannedWellSurfaceValue } from '@/api/surfaces';
 import type { LoadState } from '@/stores/session';
 
-/** The surface at one planned well of the prospect, m; nulls when the well lies outside the grid. */
+/** The surface at one planned well of the prospect, in the surface's SI unit (m, kg/m³ or Pa); nulls outside the grid. */
 export interface PlannedWellValue {
   plannedWellId: string;
   name: string;

@@ -35,3 +35,24 @@ describe('toSurfaceRequest', () => {
     expect(() => toSurfaceRequest({ ...DEFAULT_RUN_FORM, wellSource: 'offset-set' }, 'm')).toThrow('Choose the planned well whose offset set to use.');
   });
 });
+
+describe('toSurfaceRequest for quantities at a depth', () => {
+  it('sends the depth in metres and the contour interval and variogram in the quantity’s SI unit', () => {
+    const form = { ...DEFAULT_RUN_FORM, quantity: 'emw_at_depth' as const, depth: 10_000, contourInterval: 0.1, variogramByHand: true, nugget: 0, sill: 1, rangeKm: 10 };
+    const body = toSurfaceRequest(form, 'ft', { pressure: 'MPa', emw: 'ppg' });
+    // 10,000 ft = 3048 m (international foot, NIST SP 811 B.9).
+    expect(body.depthTvdssM).toBeCloseTo(3048, 9);
+    // 1 ppg = 119.826427 kg/m³ (0.45359237 kg per 231 in³; NIST SP 811 B.9).
+    expect(body.contourIntervalKgM3).toBeCloseTo(11.9826427, 6);
+    expect((body.method as { variogram: { sill: number } }).variogram.sill).toBeCloseTo(119.826427 ** 2, 3);
+    expect(surfaceRequestBody.safeParse(body).success).toBe(true);
+    const op = toSurfaceRequest({ ...DEFAULT_RUN_FORM, quantity: 'overpressure_at_depth', depth: 3000, contourInterval: 100 }, 'm', { pressure: 'psi', emw: 'sg' });
+    // 1 psi = 6894.757 Pa (NIST SP 811 B.9).
+    expect(op.contourIntervalPa).toBeCloseTo(689_475.7, 0);
+    expect(op.depthTvdssM).toBe(3000);
+  });
+
+  it('asks for the depth before running an at-depth quantity', () => {
+    expect(() => toSurfaceRequest({ ...DEFAULT_RUN_FORM, quantity: 'overpressure_at_depth' }, 'm')).toThrow('Give the depth below sea level to read the pore pressure at.');
+  });
+});

@@ -1,6 +1,7 @@
 import { FT_M } from '@shared/units';
-import type { SurfaceQuantity, SurfaceRequest } from '@shared/schemas/surfaces';
-import type { DisplayDepthUnit } from '@/stores/units';
+import { AT_DEPTH_QUANTITIES, DEFAULT_CONTOUR_INTERVALS, SURFACE_QUANTITY_KINDS, type SurfaceQuantity, type SurfaceRequest } from '@shared/schemas/surfaces';
+import { DEFAULT_UNITS, type DisplayDepthUnit, type UnitPreferences } from '@/stores/units';
+import { surfaceDisplay } from './surfaceDisplay';
 
 export type VariogramModelName = 'spherical' | 'exponential' | 'gaussian';
 
@@ -14,7 +15,9 @@ export interface SurfaceRunForm {
   method: 'kriging' | 'idw';
   model: VariogramModelName;
   variogramByHand: boolean;
-  /** m² (or ft² when depths read in feet). */
+  /** For EMW and overpressure: the depth below sea level, in the display depth unit. */
+  depth: number | null;
+  /** In the square of the quantity's display unit (m², ft², sg², MPa²…). */
   nugget: number;
   sill: number;
   rangeKm: number;
@@ -22,7 +25,7 @@ export interface SurfaceRunForm {
   power: number;
   cellSizeM: number;
   extentBufferKm: number;
-  /** In the display depth unit. */
+  /** In the quantity's display unit (depth unit, EMW unit or pressure unit). */
   contourInterval: number;
 }
 
@@ -39,6 +42,7 @@ export const DEFAULT_RUN_FORM: SurfaceRunForm = {
   method: 'kriging',
   model: 'spherical',
   variogramByHand: false,
+  depth: null,
   nugget: 0,
   sill: 40_000,
   rangeKm: 15,
@@ -49,14 +53,34 @@ export const DEFAULT_RUN_FORM: SurfaceRunForm = {
   contourInterval: 50,
 };
 
+/** A standard deviation per kind for a hand-set sill to start from: 200 m, 100 kg/m³, 3 MPa (common practice, no source). */
+const DEFAULT_SILL_SD = { depth: 200, emw: 100, pressure: 3e6 } as const;
+
+/**
+ * The contour interval and hand-set sill to start from when the quantity changes, in the reader's units
+ * (rounded to two significant figures so the field reads cleanly).
+ * @example quantityDefaults('emw_at_depth', { depth: 'm', pressure: 'MPa', emw: 'sg' }) // { contourInterval: 0.02, sill: 0.01 }
+ */
+export function quantityDefaults(quantity: SurfaceQuantity, units: UnitPreferences): { contourInterval: number; sill: number } {
+  const kind = SURFACE_QUANTITY_KINDS[quantity];
+  const { factor } = surfaceDisplay(quantity, units);
+  const round = (v: number) => Number(v.toPrecision(2));
+  return { contourInterval: round(DEFAULT_CONTOUR_INTERVALS[kind] * factor), sill: round((DEFAULT_SILL_SD[kind] * factor) ** 2) };
+}
+
 /**
  * The request body for a form: distances to metres, the contour interval and a hand-set variogram from
  * the display depth unit to metres (a variance scales with the square of the length unit).
  * @example toSurfaceRequest({ ...DEFAULT_RUN_FORM, contourInterval: 100 }, 'ft').contourIntervalM // 30.48
  */
-export function toSurfaceRequest(form: SurfaceRunForm, depthUnit: DisplayDepthUnit): SurfaceRequest {
+export function toSurfaceRequest(form: SurfaceRunForm, depthUnit: DisplayDepthUnit, units: Pick<UnitPreferences, 'pressure' | 'emw'> = DEFAULT_UNITS): SurfaceRequest {
   if (form.wellSource === 'offset-set' && !form.plannedWellId) throw new Error('Choose the planned well whose offset set to use.');
+  const atDepth = AT_DEPTH_QUANTITIES.includes(form.quantity);
+  if (atDepth && (form.depth === null || !Number.isFinite(form.depth) || form.depth < 0)) throw new Error('Give the depth below sea level to read the pore pressure at.');
+  const kind = SURFACE_QUANTITY_KINDS[form.quantity];
+  // The display unit per SI unit of the quantity; a variance scales with its square.
   const toM = depthUnit === 'ft' ? FT_M : 1;
+  const toSi = kind === 'depth' ? toM : 1 / surfaceDisplay(form.quantity, { depth: depthUnit, ...units }).factor;
   const wells: SurfaceRequest['wells'] =
     form.wellSource === 'prospect' ? { from: 'prospect', bufferKm: form.bufferKm } : { from: 'offset-set', plannedWellId: form.plannedWellId as string };
   const method: SurfaceRequest['method'] =
@@ -66,7 +90,7 @@ export function toSurfaceRequest(form: SurfaceRunForm, depthUnit: DisplayDepthUn
           kind: 'kriging',
           model: form.model,
           maxNeighbours: form.maxNeighbours,
-          variogram: form.variogramByHand ? { model: form.model, nugget: form.nugget * toM * toM, sill: form.sill * toM * toM, range: form.rangeKm * 1000 } : null,
+          variogram: form.variogramByHand ? { model: form.model, nugget: form.nugget * toSi * toSi, sill: form.sill * toSi * toSi, range: form.rangeKm * 1000 } : null,
         };
   const body: SurfaceRequest = {
     quantity: form.quantity,
@@ -74,8 +98,11 @@ export function toSurfaceRequest(form: SurfaceRunForm, depthUnit: DisplayDepthUn
     method,
     cellSizeM: form.cellSizeM,
     extentBufferKm: form.extentBufferKm,
-    contourIntervalM: form.contourInterval * toM,
   };
+  if (kind === 'depth') body.contourIntervalM = form.contourInterval * toSi;
+  else if (kind === 'emw') body.contourIntervalKgM3 = form.contourInterval * toSi;
+  else body.contourIntervalPa = form.contourInterval * toSi;
+  if (atDepth) body.depthTvdssM = (form.depth as number) * toM;
   const name = form.name.trim();
   if (name) body.name = name;
   return body;
