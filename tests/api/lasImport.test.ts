@@ -173,10 +173,30 @@ describe('LAS 2.0 import', () => {
     expect((await team.agent.get(`${base}/wells?q=OSPREY-9`)).body.total).toBe(1);
   });
 
+  it('says why an unreadable location cannot create the well, at both lines', async () => {
+    const text = withWellItems(unknownWell('PETREL-4', '177777777777W577'), ' LATI.DEG        -132.61                      : LATITUDE', ' LONG.DEG        -101.215                     : LONGITUDE');
+    const res = await post('far.las', { dryRun: 'true' }, Buffer.from(text));
+    expect(res.body.problems).toEqual([
+      {
+        line: 12,
+        column: 'WELL',
+        message: 'no well named "PETREL-4" or with UWI/API "177777777777W577" in this team, and the location in the file cannot create it (see line 13); import the well header first or choose the well',
+      },
+      { line: 13, column: 'LATI', message: 'latitude -132.61 is outside −90..90' },
+    ]);
+  });
+
   it('creates the well from X/Y only with the EPSG code the user gives', async () => {
     const text = withWellItems(unknownWell('HERON-2', '188888888888W588'), ' X   .M          500000                       : EASTING', ' Y   .M          6400000                      : NORTHING');
     const bare = await post('heron.las', { dryRun: 'true' }, Buffer.from(text));
-    expect(bare.body.problems).toEqual([{ line: 13, column: 'X', message: 'the file gives X/Y but no LATI/LONG: choose the EPSG code of X/Y to create well "HERON-2"' }]);
+    expect(bare.body.problems).toEqual([
+      {
+        line: 12,
+        column: 'WELL',
+        message: 'no well named "HERON-2" or with UWI/API "188888888888W588" in this team, and the location in the file cannot create it (see line 13); import the well header first or choose the well',
+      },
+      { line: 13, column: 'X', message: 'the file gives X/Y but no LATI/LONG: choose the EPSG code of X/Y to create well "HERON-2"' },
+    ]);
     const res = await post('heron.las', { dryRun: 'true', epsg: '32713' }, Buffer.from(text));
     expect(res.body.problems).toEqual([]);
     // Reference: proj4 itself, the library the import converts with.
@@ -187,9 +207,9 @@ describe('LAS 2.0 import', () => {
     // Swapped X/Y are refused, saying they may be swapped.
     const swapped = withWellItems(unknownWell('HERON-2', '188888888888W588'), ' X   .M          6400000                      : EASTING', ' Y   .M          500000                       : NORTHING');
     const bad = await post('heron-swapped.las', { dryRun: 'true', epsg: '32713' }, Buffer.from(swapped));
-    expect(bad.body.problems).toHaveLength(1);
-    expect(bad.body.problems[0]).toMatchObject({ line: 13, column: 'X' });
-    expect(bad.body.problems[0].message).toMatch(/are easting and northing swapped/);
+    expect(bad.body.problems).toHaveLength(2);
+    expect(bad.body.problems[1]).toMatchObject({ line: 13, column: 'X' });
+    expect(bad.body.problems[1].message).toMatch(/are easting and northing swapped/);
   });
 
   it('warns about a NULL value that the file does not use', async () => {

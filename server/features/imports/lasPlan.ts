@@ -81,7 +81,7 @@ function newWellFrom(las: LasFile, uwi: string, epsg: number): { well: LasNewWel
     }
   }
   if (!at) {
-    if (problems.length) return { well: null, problems, missing: null };
+    if (problems.length) return { well: null, problems, missing: `the location in the file cannot create it (see line ${problems[0].line})` };
     const one = loc.lat ?? loc.lon ?? loc.x ?? loc.y;
     const other = loc.lat ? 'LONG' : loc.lon ? 'LATI' : loc.x ? 'Y' : 'X';
     return { well: null, problems, missing: one ? `the file has ${one.mnemonic} but no ${other} to create it` : 'the file has no LATI/LONG (or X/Y) in ~W or ~P to create it' };
