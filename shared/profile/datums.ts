@@ -34,3 +34,28 @@ export function wellDatums(well: ProfileWell): WellDatums {
   const airGapM = check(fn, 'airGapM', well.airGapM, 0);
   return { seaLevelTvdM: datumElevationM, mudlineTvdM: airGapM + waterDepthM };
 }
+
+/** A well header's datum fields as stored and entered: any of them may be unknown. */
+export interface WellHeaderDatums {
+  datumElevationM: number;
+  waterDepthM: number | null;
+  airGapM: number | null;
+  groundElevationM: number | null;
+  offshore: boolean;
+}
+
+/**
+ * A well's datums for the profile builder from its header, the one rule the profile page, the comparison and the
+ * server's surfaces share: a missing water depth is land; a missing air gap is, offshore, the datum elevation (rig
+ * datum above the sea) and, on land, the rig datum above the ground (0 when the ground elevation is unknown too),
+ * so depths below the mudline start at the ground on land.
+ * @example profileWellFromHeader({ datumElevationM: 310, waterDepthM: null, airGapM: null, groundElevationM: 302, offshore: false }); // airGapM 8
+ */
+export function profileWellFromHeader(h: WellHeaderDatums): ProfileWell {
+  const waterDepthM = h.waterDepthM ?? 0;
+  let airGapM: number;
+  if (h.airGapM !== null) airGapM = h.airGapM;
+  else if (h.offshore) airGapM = Math.max(0, h.datumElevationM);
+  else airGapM = h.groundElevationM === null ? 0 : Math.max(0, h.datumElevationM - h.groundElevationM);
+  return { datumElevationM: h.datumElevationM, waterDepthM, airGapM };
+}

@@ -48,8 +48,10 @@ describe('profile data helpers', () => {
     expect(Object.keys(picked)).toEqual(['sonic']);
   });
   it('fills a missing air gap from the datum offshore and 0 on land', () => {
-    expect(profileWell({ datumElevationM: 25, waterDepthM: 100, airGapM: null, offshore: true })).toEqual({ datumElevationM: 25, waterDepthM: 100, airGapM: 25 });
-    expect(profileWell({ datumElevationM: 310, waterDepthM: null, airGapM: null, offshore: false })).toEqual({ datumElevationM: 310, waterDepthM: 0, airGapM: 0 });
+    expect(profileWell({ datumElevationM: 25, waterDepthM: 100, airGapM: null, groundElevationM: null, offshore: true })).toEqual({ datumElevationM: 25, waterDepthM: 100, airGapM: 25 });
+    expect(profileWell({ datumElevationM: 310, waterDepthM: null, airGapM: null, groundElevationM: null, offshore: false })).toEqual({ datumElevationM: 310, waterDepthM: 0, airGapM: 0 });
+    // On land the rig floor stands above the ground: depths below the "mudline" start at the ground.
+    expect(profileWell({ datumElevationM: 310, waterDepthM: null, airGapM: null, groundElevationM: 302, offshore: false })).toEqual({ datumElevationM: 310, waterDepthM: 0, airGapM: 8 });
   });
   it('reads stored profile preferences field by field', () => {
     expect(readProfilePreferences('{"view":"emw","datum":"xx"}')).toEqual({ view: 'emw', mode: 'tvd', datum: 'rt' });

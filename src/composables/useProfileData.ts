@@ -1,7 +1,7 @@
 import { computed, ref, shallowRef, watch, type Ref } from 'vue';
 import type { LogCurveData, LogCurveSummary, PressureObservation, SurveyStation, WellDetail } from '@shared/schemas/wells';
 import type { Interpretation } from '@shared/schemas/interpretations';
-import { alignLogs, type AlignedLogs, type LogCurveInput, type ProfileLogRole, type ProfileWell } from '@shared/profile';
+import { alignLogs, profileWellFromHeader, type AlignedLogs, type LogCurveInput, type ProfileLogRole, type ProfileWell } from '@shared/profile';
 import * as wellsApi from '@/api/wells';
 import * as profileApi from '@/api/profile';
 import type { LoadState } from '@/stores/session';
@@ -23,14 +23,11 @@ export function pickCurves(curves: readonly LogCurveSummary[]): Partial<Record<P
 }
 
 /**
- * A well's datums as the profile builder wants them; missing water depth is land (0), a missing air gap is the
- * datum elevation offshore (the rig floor above the sea) and 0 on land.
- * @example profileWell({ datumElevationM: 25, waterDepthM: 100, airGapM: null, offshore: true }); // airGapM 25
+ * A well's datums as the profile builder wants them, by the rule the server's surfaces share (`profileWellFromHeader`).
+ * @example profileWell({ datumElevationM: 25, waterDepthM: 100, airGapM: null, groundElevationM: null, offshore: true }); // airGapM 25
  */
-export function profileWell(w: Pick<WellDetail, 'datumElevationM' | 'waterDepthM' | 'airGapM' | 'offshore'>): ProfileWell {
-  const waterDepthM = w.waterDepthM ?? 0;
-  const airGapM = w.airGapM ?? (w.offshore ? Math.max(0, w.datumElevationM) : 0);
-  return { datumElevationM: w.datumElevationM, waterDepthM, airGapM };
+export function profileWell(w: Pick<WellDetail, 'datumElevationM' | 'waterDepthM' | 'airGapM' | 'groundElevationM' | 'offshore'>): ProfileWell {
+  return profileWellFromHeader(w);
 }
 
 export interface ProfileData {

@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { alignLogs, buildProfile, poreIntervalTvdM, pressureAtDepth, type LogCurveInput, type ProfileLogRole, type ProfileWell } from '../../../shared/profile';
+import { alignLogs, buildProfile, poreIntervalTvdM, pressureAtDepth, profileWellFromHeader, type LogCurveInput, type ProfileLogRole, type ProfileWell } from '../../../shared/profile';
 import type { InterpretationContent } from '../../../shared/schemas/interpretations';
 import type { SurfaceExcludedWell, SurfaceQuantity } from '../../../shared/schemas/surfaces';
 import type { StationInput } from '../../../shared/trajectory';
@@ -27,19 +27,18 @@ const ROLES: readonly ProfileLogRole[] = ['sonic', 'resistivity', 'density', 'ga
 const BATCH = 20;
 
 /**
- * A well's datums for the profile builder. As on the profile page (src/composables/useProfileData.ts), a missing
- * water depth is land and a missing air gap offshore is the datum elevation; on land a missing air gap is taken
- * from the ground elevation (rig datum − ground), so depths below the ground start at the ground.
+ * A well's datums for the profile builder from its row, by the rule the profile page uses (`profileWellFromHeader`).
  * @example profileWellOf({ datum_elevation_m: 310, water_depth_m: null, air_gap_m: null, ground_elevation_m: 302, offshore: false, … }) // airGapM 8
  */
 export function profileWellOf(w: Pick<WellRow, 'datum_elevation_m' | 'water_depth_m' | 'air_gap_m' | 'ground_elevation_m' | 'offshore'>): ProfileWell {
-  const datum = Number(w.datum_elevation_m);
-  const waterDepthM = w.water_depth_m === null ? 0 : Number(w.water_depth_m);
-  let airGapM: number;
-  if (w.air_gap_m !== null) airGapM = Number(w.air_gap_m);
-  else if (w.offshore) airGapM = Math.max(0, datum);
-  else airGapM = w.ground_elevation_m === null ? 0 : Math.max(0, datum - Number(w.ground_elevation_m));
-  return { datumElevationM: datum, waterDepthM, airGapM };
+  const num = (v: number | string | null) => (v === null ? null : Number(v));
+  return profileWellFromHeader({
+    datumElevationM: Number(w.datum_elevation_m),
+    waterDepthM: num(w.water_depth_m),
+    airGapM: num(w.air_gap_m),
+    groundElevationM: num(w.ground_elevation_m),
+    offshore: w.offshore,
+  });
 }
 
 async function loadLogs(db: Db, ids: string[]) {
