@@ -44,6 +44,11 @@ describe('mapping and units → request', () => {
     expect(importRequest(choices({ kind: 'tops' }))).toEqual({ kind: 'tops' });
   });
 
+  it('sends a LAS file the EPSG code of its X/Y only when one was chosen', () => {
+    expect(importRequest(choices({ kind: 'las' }))).toEqual({ kind: 'las' });
+    expect(importRequest(choices({ kind: 'las', epsg: 32631 }))).toEqual({ kind: 'las', epsg: 32631 });
+  });
+
   it('produces a mapping and units the shared reader accepts, converting feet to metres', () => {
     const text = 'Well,Easting,Northing,WD\nUTM-1,500000,6400000,300\n';
     const csv = parseCsv(text);

@@ -119,6 +119,8 @@ export function importRequest(choices: ImportChoices): ImportRequest {
     const request: ImportRequest = { kind };
     if (Object.keys(choices.curveRoles).length > 0) request.mapping = { ...choices.curveRoles };
     if (choices.wellId) request.wellId = choices.wellId;
+    // The CRS of the file's X/Y, needed only to create a well from a LAS header without LATI/LONG.
+    if (choices.epsg !== 4326) request.epsg = choices.epsg;
     return request;
   }
   const request: ImportRequest = { kind };
