@@ -42,7 +42,8 @@ describe('referenceLayerSpecs', () => {
     expect(fill.paint?.['fill-color']).toBe(BLOCKS.color);
     expect(byId(specs, ids.outline).paint?.['line-color']).toBe(BLOCKS.color);
     const sources = specs.map((l) => l as unknown as { source: string; 'source-layer': string });
-    expect(sources.every((l) => l.source === referenceSourceId(BLOCKS.id) && l['source-layer'] === 'reference')).toBe(true);
+    expect(sources.every((l) => l.source === referenceSourceId(BLOCKS.id))).toBe(true);
+    expect(sources.map((l) => l['source-layer'])).toEqual(['reference', 'reference', 'reference-labels']);
     expect(byId(specs, ids.label).layout?.['text-field']).toEqual(['coalesce', ['get', 'name'], '']);
   });
 
@@ -62,6 +63,7 @@ describe('referenceLayerSpecs', () => {
     expect(passes(point, 1)).toBe(true);
     expect(passes(point, 2)).toBe(false);
     expect(passes(point, 3)).toBe(false);
+    expect(referenceLayerSpecs(WELLS, LIGHT_PALETTE, true).map((l) => l.id)).toEqual([referenceLayerIds(WELLS.id).point, referenceLayerIds(WELLS.id).pointLabel]);
   });
 
   it('labels lines along the line, and draws only the families the layer holds', () => {

@@ -26,8 +26,9 @@ export const REFERENCE_KIND_COLOURS: Record<ReferenceKind, string> = {
   other: '#6B7F99',
 };
 
-/** The `source-layer` name the server gives every reference tile (teamTiles.service.ts). */
+/** The `source-layer` names of a reference tile (teamTiles.service.ts): the features, and one label point per named polygon. */
 export const REFERENCE_SOURCE_LAYER = 'reference';
+export const REFERENCE_LABEL_SOURCE_LAYER = 'reference-labels';
 
 /**
  * The map source id of an uploaded layer; the same string is its tile layer name on the server.
@@ -77,7 +78,15 @@ const KIND_STYLE: Record<ReferenceKind, { fillOpacity: number; lineWidth: Expres
 /** Layer ids of one uploaded layer, one per drawing, so the browser test and the panel can find them. */
 export function referenceLayerIds(layerId: string) {
   const s = referenceSourceId(layerId);
-  return { fill: `${s}-fill`, outline: `${s}-outline`, line: `${s}-line`, point: `${s}-point`, label: `${s}-label`, lineLabel: `${s}-line-label` };
+  return {
+    fill: `${s}-fill`,
+    outline: `${s}-outline`,
+    line: `${s}-line`,
+    point: `${s}-point`,
+    label: `${s}-label`,
+    lineLabel: `${s}-line-label`,
+    pointLabel: `${s}-point-label`,
+  };
 }
 
 /**
@@ -90,7 +99,8 @@ export function referenceSource(origin: string, teamId: string, layerId: string,
 
 /**
  * The map layers of one uploaded layer in its own colour: fill and outline for polygons, a line for lines,
- * circles for points, and the `name` property (when a feature has one) as a label. Only the families the
+ * circles for points, and the `name` property (when a feature has one) as a label: at a point inside each
+ * area, along each line, beside each point. Only the families the
  * layer holds are drawn; a switched-off layer stays in the style with `visibility: none`.
  * @example referenceLayerSpecs(layer, LIGHT_PALETTE, true).map((l) => l.type) // ['fill', 'line', 'symbol'] for lease blocks
  */
@@ -136,23 +146,27 @@ export function referenceLayerSpecs(layer: Pick<ReferenceLayer, 'id' | 'kind' | 
       paint: { 'circle-radius': byZoom(5, 3.5, 12, 5.5), 'circle-color': layer.color, 'circle-stroke-color': c.wellStroke, 'circle-stroke-width': 1.2 },
     });
   }
-  if (families.includes('polygon') || families.includes('point')) {
+  const label = { 'text-field': nameOf, 'text-font': [LABEL_FONT], 'text-optional': true };
+  if (families.includes('polygon')) {
+    // From the server's label points, not the polygons: one name per area, not one per tile it crosses.
     out.push({
-      ...common,
+      source,
+      'source-layer': REFERENCE_LABEL_SOURCE_LAYER,
       id: ids.label,
       type: 'symbol',
       minzoom: 6,
-      filter: ['any', isFamily('polygon'), isFamily('point')],
-      layout: {
-        'text-field': nameOf,
-        'text-font': [LABEL_FONT],
-        'text-size': 11,
-        'text-max-width': 8,
-        'text-optional': true,
-        // A point's name sits beside its circle; an area's at its middle.
-        'text-variable-anchor': ['center', 'top', 'bottom'],
-        'text-radial-offset': ['case', isFamily('point'), 0.8, 0],
-      },
+      layout: { ...label, 'text-size': 11.5, 'text-max-width': 8, 'text-letter-spacing': 0.03 },
+      paint: labelPaint,
+    });
+  }
+  if (families.includes('point')) {
+    out.push({
+      ...common,
+      id: ids.pointLabel,
+      type: 'symbol',
+      minzoom: 6,
+      filter: isFamily('point'),
+      layout: { ...label, 'text-size': 11, 'text-anchor': 'left', 'text-offset': [0.8, 0] },
       paint: labelPaint,
     });
   }
@@ -163,7 +177,7 @@ export function referenceLayerSpecs(layer: Pick<ReferenceLayer, 'id' | 'kind' | 
       type: 'symbol',
       minzoom: 6,
       filter: isFamily('line'),
-      layout: { 'text-field': nameOf, 'text-font': [LABEL_FONT], 'text-size': 10.5, 'symbol-placement': 'line', 'text-optional': true },
+      layout: { ...label, 'text-size': 10.5, 'symbol-placement': 'line' },
       paint: labelPaint,
     });
   }

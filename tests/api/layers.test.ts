@@ -1,4 +1,5 @@
 import { VectorTile } from '@mapbox/vector-tile';
+import { booleanPointInPolygon, polygon } from '@turf/turf';
 import { PbfReader } from 'pbf';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { freshTeamAgent, memberAgent, startTestApp, type TestContext } from './support/testApp';
@@ -96,7 +97,8 @@ describe('reference layers', () => {
     expect(tile.status).toBe(200);
     expect(tile.headers['content-type']).toBe('application/vnd.mapbox-vector-tile');
     // Decoded with @mapbox/vector-tile, the reader MapLibre itself uses.
-    const layer = new VectorTile(new PbfReader(tile.body as Buffer)).layers.reference;
+    const decoded = new VectorTile(new PbfReader(tile.body as Buffer));
+    const layer = decoded.layers.reference;
     expect(layer.length).toBe(2);
     const features = Array.from({ length: layer.length }, (_, i) => layer.feature(i));
     expect(features.map((f) => f.properties.name).sort()).toEqual(['Q-17', 'Q-18']);
@@ -109,6 +111,15 @@ describe('reference layers', () => {
     expect(Math.max(...lons)).toBeCloseTo(-100.9, 3);
     expect(Math.min(...lats)).toBeCloseTo(-32.6, 3);
     expect(Math.max(...lats)).toBeCloseTo(-32.5, 3);
+    // One label point per named block, inside it (turf's point-in-polygon as the independent check).
+    const labels = decoded.layers['reference-labels'];
+    expect(labels.length).toBe(2);
+    for (let i = 0; i < labels.length; i++) {
+      const point = labels.feature(i).toGeoJSON(56, 152, 8) as { geometry: { coordinates: number[] } };
+      const name = String(labels.feature(i).properties.name);
+      const west = name === 'Q-17' ? -101 : -100.9;
+      expect(booleanPointInPolygon(point.geometry.coordinates, polygon(block(west, -32.6, name).geometry.coordinates))).toBe(true);
+    }
     // A tile away from the blocks holds nothing of them.
     expect((await team.agent.get(`${base}/tiles/reference-${blocks.id}/8/0/0.mvt`)).status).toBe(204);
     const planner = await memberAgent(ctx, team.teamId, 'planner');

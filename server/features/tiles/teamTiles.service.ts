@@ -62,14 +62,25 @@ function plannedQuery(teamId: string, z: number, x: number, y: number): SQL {
     SELECT ST_AsMVT(f, 'planned-wells', ${EXTENT}, 'geom') AS tile FROM f WHERE geom IS NOT NULL`;
 }
 
+/**
+ * A reference layer's features (`reference`) and, in a second tile layer (`reference-labels`), one point
+ * inside each named polygon. Labelling the polygons themselves would repeat the name in every tile the
+ * polygon crosses; the point falls in one tile only.
+ */
 function referenceQuery(teamId: string, layerId: string, z: number, x: number, y: number): SQL {
   const env = envelope(z, x, y);
+  const inTile = sql`l.team_id = ${teamId} AND l.id = ${layerId} AND r.geom && ST_Transform(${env}, 4326)`;
   return sql`
     WITH f AS (
       SELECT ST_AsMVTGeom(ST_Transform(r.geom, 3857), ${env}, ${EXTENT}, ${BUFFER}, true) AS geom, r.properties->>'name' AS name, r.properties::text AS props
       FROM reference_features r JOIN reference_layers l ON l.id = r.layer_id
-      WHERE l.team_id = ${teamId} AND l.id = ${layerId} AND r.geom && ST_Transform(${env}, 4326))
-    SELECT ST_AsMVT(f, 'reference', ${EXTENT}, 'geom') AS tile FROM f WHERE geom IS NOT NULL`;
+      WHERE ${inTile}),
+    p AS (
+      SELECT ST_AsMVTGeom(ST_Transform(ST_PointOnSurface(r.geom), 3857), ${env}, ${EXTENT}, ${BUFFER}, true) AS geom, r.properties->>'name' AS name
+      FROM reference_features r JOIN reference_layers l ON l.id = r.layer_id
+      WHERE ${inTile} AND GeometryType(r.geom) IN ('POLYGON', 'MULTIPOLYGON') AND coalesce(r.properties->>'name', '') <> '')
+    SELECT coalesce((SELECT ST_AsMVT(f, 'reference', ${EXTENT}, 'geom') FROM f WHERE geom IS NOT NULL), ''::bytea)
+      || coalesce((SELECT ST_AsMVT(p, 'reference-labels', ${EXTENT}, 'geom') FROM p WHERE geom IS NOT NULL), ''::bytea) AS tile`;
 }
 
 export type TeamLayer = { kind: 'wells' | 'prospects' | 'planned-wells' } | { kind: 'reference'; layerId: string };
