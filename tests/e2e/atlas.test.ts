@@ -5,6 +5,7 @@ import { ARTIFACTS, foreignRequests, startE2e, type E2eContext } from './support
 
 let e: E2eContext;
 let plannedWellId: string | null = null;
+let referenceLayerId: string | null = null;
 
 beforeAll(async () => {
   e = await startE2e();
@@ -14,6 +15,10 @@ afterAll(async () => {
   if (plannedWellId && e) {
     const teamId = e.ctx.demoTeamId;
     await e.page.evaluate(({ t, id }) => fetch(`/api/teams/${t}/planned-wells/${id}`, { method: 'DELETE' }).then((r) => r.status), { t: teamId, id: plannedWellId }).catch(() => null);
+  }
+  // Likewise a reference layer left behind by a failed run of the upload test.
+  if (referenceLayerId && e) {
+    await e.page.evaluate(({ t, id }) => fetch(`/api/teams/${t}/layers/${id}`, { method: 'DELETE' }).then((r) => r.status), { t: e.ctx.demoTeamId, id: referenceLayerId }).catch(() => null);
   }
   await e?.close();
 });
@@ -53,6 +58,9 @@ describe('the Atlas through the page', () => {
     expect(await page.getByTestId('map-coordinates').count()).toBe(1);
     expect(await page.locator('.maplibregl-ctrl-scale').textContent()).toMatch(/\d+\s*(km|m)/);
     await page.screenshot({ path: join(ARTIFACTS, 'atlas-wells.png') });
+    // The planner may switch reference layers but not add them (shared/auth/permissions.ts).
+    await page.getByTestId('reference-layers').waitFor();
+    expect(await page.getByTestId('reference-add').count()).toBe(0);
 
     // Search a well by name: the map flies to it and its card opens.
     const first = await page.evaluate(
@@ -65,6 +73,7 @@ describe('the Atlas through the page', () => {
     await option.click();
     await expect.poll(() => page.getByTestId('well-card-name').textContent(), { timeout: 10_000 }).toBe(first.name);
     expect(await page.getByTestId('well-card-open').getAttribute('href')).toBe(`/wells/${first.id}`);
+    expect(await page.getByTestId('well-card-profile').getAttribute('href')).toBe(`/wells/${first.id}/profile`);
 
     // Close the card and click the well itself, now at the centre of the map.
     await page.getByTestId('well-card-close').click();
@@ -181,6 +190,97 @@ describe('the Atlas through the page', () => {
     await expect.poll(() => page.getByTestId('prospect-card').count(), { timeout: 10_000 }).toBe(0);
     const left = await page.evaluate((t) => fetch(`/api/teams/${t}/prospects`).then((r) => r.json()), e.ctx.demoTeamId);
     expect((left as { name: string }[]).some((p) => p.name === name)).toBe(false);
+    expect(foreignRequests(e.requests, baseUrl)).toEqual([]);
+  });
+
+  it('uploads a reference layer through the panel as the geoscientist, shows it switched on and drawn, and deletes it', async () => {
+    const { page, baseUrl, context } = e;
+    const teamId = e.ctx.demoTeamId;
+    await context.clearCookies();
+    await page.goto(`${baseUrl}/`);
+    await page.waitForURL(/\/sign-in/);
+    await page.getByTestId('signin-email').locator('input').fill('geoscientist@porelith.example');
+    await page.getByTestId('signin-password').locator('input').fill('porelith-demo');
+    await page.getByTestId('signin-submit').click();
+    await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
+    await page.goto(`${baseUrl}/map`);
+    await settled(page);
+
+    // A block over the middle of the demo wells, so it sits where the map opens.
+    const wells = await page.evaluate((t) => fetch(`/api/teams/${t}/wells?limit=500`).then((r) => r.json()).then((b) => b.items as { lon: number; lat: number }[]), teamId);
+    const lons = wells.map((w) => w.lon);
+    const lats = wells.map((w) => w.lat);
+    const [cx, cy] = [(Math.min(...lons) + Math.max(...lons)) / 2, (Math.min(...lats) + Math.max(...lats)) / 2];
+    const [hx, hy] = [(Math.max(...lons) - Math.min(...lons)) / 5, (Math.max(...lats) - Math.min(...lats)) / 5];
+    const ring = [[cx - hx, cy - hy], [cx + hx, cy - hy], [cx + hx, cy + hy], [cx - hx, cy + hy], [cx - hx, cy - hy]];
+    const bowTie = [[cx - hx, cy - hy], [cx + hx, cy + hy], [cx + hx, cy - hy], [cx - hx, cy + hy], [cx - hx, cy - hy]];
+    const collection = (coordinates: number[][], name: string) =>
+      Buffer.from(JSON.stringify({ type: 'FeatureCollection', features: [{ type: 'Feature', properties: { name }, geometry: { type: 'Polygon', coordinates: [coordinates] } }] }));
+
+    await page.getByTestId('reference-add').click();
+    const dialog = page.getByTestId('reference-upload');
+    await dialog.waitFor();
+    // Nothing chosen yet: the form names the missing file before asking the server.
+    await page.getByTestId('reference-upload-submit').click();
+    await expect.poll(() => dialog.textContent()).toContain('File is required');
+
+    // A self-intersecting outline: the server's own words come back, naming the feature.
+    await page.getByTestId('reference-file').setInputFiles({ name: 'bad-blocks.geojson', mimeType: 'application/geo+json', buffer: collection(bowTie, 'Twisted') });
+    const name = `E2E licence blocks, northern shelf ${Date.now().toString(36)}`;
+    await page.getByTestId('reference-name').locator('input').fill(name);
+    await page.getByTestId('reference-upload-submit').click();
+    const error = page.getByTestId('reference-upload-error');
+    await error.waitFor({ timeout: 10_000 });
+    expect(await error.textContent()).toMatch(/Feature 1 is not a valid geometry: Self-intersection/);
+    await page.screenshot({ path: join(ARTIFACTS, 'atlas-reference-error.png') });
+
+    // The good file goes in, the dialog closes, and the layer is listed switched on.
+    await page.getByTestId('reference-file').setInputFiles({ name: 'blocks.geojson', mimeType: 'application/geo+json', buffer: collection(ring, 'Block E-7') });
+    await page.getByTestId('reference-upload-submit').click();
+    const row = page.getByTestId('reference-layer').filter({ hasText: name });
+    await row.waitFor({ timeout: 15_000 });
+    await expect.poll(() => dialog.count(), { timeout: 10_000 }).toBe(0);
+    referenceLayerId = await row.getAttribute('data-layer-id');
+    expect(referenceLayerId).toMatch(/^[0-9a-f-]{36}$/);
+    const toggle = row.getByTestId('reference-toggle');
+    expect(await toggle.getAttribute('aria-checked')).toBe('true');
+
+    // Its own source and layers are in the map's style, and its tiles draw the block in view.
+    await settled(page);
+    await expect.poll(async () => (await attr(page, 'data-reference-ids')).split(','), { timeout: 20_000 }).toContain(referenceLayerId);
+    expect(e.requests.some((u) => u.includes(`/api/teams/${teamId}/tiles/reference-${referenceLayerId}/`))).toBe(true);
+    await page.screenshot({ path: join(ARTIFACTS, 'atlas-reference-layer.png') });
+    // Both themes: the layer keeps its own colour, the labels follow the theme.
+    const theme = await page.evaluate(() => document.documentElement.dataset.theme);
+    await page.getByTestId('theme-toggle').click();
+    await expect.poll(() => page.evaluate(() => document.documentElement.dataset.theme)).not.toBe(theme);
+    await settled(page);
+    await expect.poll(async () => (await attr(page, 'data-reference-ids')).split(','), { timeout: 20_000 }).toContain(referenceLayerId);
+    await page.screenshot({ path: join(ARTIFACTS, 'atlas-reference-layer-other-theme.png') });
+
+    // Switched off it leaves the map, and the switch is remembered across a reload.
+    await toggle.click();
+    await expect.poll(() => toggle.getAttribute('aria-checked')).toBe('false');
+    await settled(page);
+    await expect.poll(async () => (await attr(page, 'data-reference-ids')).split(','), { timeout: 20_000 }).not.toContain(referenceLayerId);
+    await page.reload();
+    await settled(page);
+    const reloaded = page.getByTestId('reference-layer').filter({ hasText: name });
+    await reloaded.waitFor({ timeout: 15_000 });
+    expect(await reloaded.getByTestId('reference-toggle').getAttribute('aria-checked')).toBe('false');
+    await reloaded.getByTestId('reference-toggle').click();
+    await settled(page);
+    await expect.poll(async () => (await attr(page, 'data-reference-ids')).split(','), { timeout: 20_000 }).toContain(referenceLayerId);
+
+    // Deleted through the panel, it is gone from the list, the map and the server.
+    await reloaded.getByTestId('reference-delete').click();
+    const confirm = page.locator('.n-dialog').getByRole('button', { name: 'Delete' });
+    await confirm.waitFor();
+    await confirm.click();
+    await expect.poll(() => page.getByTestId('reference-layer').filter({ hasText: name }).count(), { timeout: 10_000 }).toBe(0);
+    const left = await page.evaluate((t) => fetch(`/api/teams/${t}/layers`).then((r) => r.json()), teamId);
+    expect((left as { id: string }[]).some((l) => l.id === referenceLayerId)).toBe(false);
+    referenceLayerId = null;
     expect(foreignRequests(e.requests, baseUrl)).toEqual([]);
   });
 });

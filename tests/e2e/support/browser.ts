@@ -34,7 +34,8 @@ export interface E2eContext {
 
 /** The real built app served on a free loopback port, and a fresh Chromium profile pointed at it. */
 export async function startE2e(): Promise<E2eContext> {
-  const ctx = await startTestApp();
+  // PORELITH_DIST lets a run serve a client built into another folder; without it, the app's default (dist).
+  const ctx = await startTestApp(process.env.PORELITH_DIST ? { PORELITH_DIST: process.env.PORELITH_DIST } : {});
   const server = createApp({ db: ctx.db, env: ctx.env, mailer: ctx.mailer, serveClient: true }).listen(0, '127.0.0.1');
   await new Promise<void>((r) => server.once('listening', () => r()));
   const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
