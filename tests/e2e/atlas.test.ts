@@ -196,6 +196,12 @@ describe('the Atlas through the page', () => {
   it('uploads a reference layer through the panel as the geoscientist, shows it switched on and drawn, and deletes it', async () => {
     const { page, baseUrl, context } = e;
     const teamId = e.ctx.demoTeamId;
+    // The planner's planned well goes now: the geoscientist signed in below may not delete it.
+    if (plannedWellId) {
+      const status = await page.evaluate(({ t, id }) => fetch(`/api/teams/${t}/planned-wells/${id}`, { method: 'DELETE' }).then((r) => r.status), { t: teamId, id: plannedWellId });
+      expect(status).toBe(204);
+      plannedWellId = null;
+    }
     await context.clearCookies();
     await page.goto(`${baseUrl}/`);
     await page.waitForURL(/\/sign-in/);
