@@ -59,16 +59,26 @@ describe('sign-in', () => {
     );
   });
 
-  it('rate-limits repeated sign-in attempts with a clear 429', async () => {
+  it('rate-limits repeated failed sign-ins to one account with a clear 429, not successful ones or other accounts', async () => {
     const limited = await startTestApp({ SIGNIN_RATE_MAX: '3' });
     try {
+      const post = (email: string, password: string) => supertest(limited.app).post('/api/auth/sign-in').send({ email, password });
+      // Successful sign-ins never count: a team behind one address signs in all day.
+      for (let i = 0; i < 5; i++) expect((await post('planner@porelith.example', 'porelith-demo')).status).toBe(200);
       const codes: number[] = [];
       for (let i = 0; i < 5; i++) {
-        const res = await supertest(limited.app).post('/api/auth/sign-in').send({ email: 'viewer@porelith.example', password: 'wrong-password' });
+        const res = await post('viewer@porelith.example', 'wrong-password');
         codes.push(res.status);
-        if (res.status === 429) expect(res.body.error.message).toMatch(/Too many sign-in attempts.*try again in 15 minutes/);
+        if (res.status === 429) expect(res.body.error.message).toMatch(/^Too many failed sign-in attempts for this account from this address; try again in (15 minutes|14 minutes)\.$/);
       }
       expect(codes).toEqual([401, 401, 401, 429, 429]);
+      // The limit is per account: a colleague at the same address still signs in.
+      expect((await post('geoscientist@porelith.example', 'porelith-demo')).status).toBe(200);
+      // Trying many accounts from one address meets the looser per-address cap (5 × 3 failures).
+      const spray: number[] = [];
+      for (let i = 0; i < 14; i++) spray.push((await post(`nobody-${i}@example.org`, 'guess')).status);
+      expect(spray.slice(0, 10).every((c) => c === 401)).toBe(true);
+      expect(spray.slice(-2)).toEqual([429, 429]);
     } finally {
       await limited.close();
     }

@@ -1,5 +1,5 @@
 import { Router, type RequestHandler } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import { acceptTokenBody, resetRequestBody, signInBody } from '../../../shared/schemas/auth';
 import type { Db } from '../../db/client';
 import type { Env } from '../../env';
@@ -9,16 +9,37 @@ import { endRequestSession, issueSessionCookie } from '../../middleware/session'
 import type { Mailer } from '../mail/mailer';
 import { acceptInvitation, loadSession, requestPasswordReset, resetPassword, signIn, startSession } from './auth.service';
 
-function limiter(env: Env, what: string): RequestHandler {
+interface LimitOptions {
+  /** What the message calls the attempts. */
+  what: string;
+  /** Count per address and e-mail (so one office behind one address does not lock itself out), or per address. */
+  perAccount: boolean;
+  /** Attempts allowed in the window, as a multiple of SIGNIN_RATE_MAX. */
+  factor?: number;
+  /** Successful attempts do not count (sign-in): only failures are guessing. */
+  skipSuccessful?: boolean;
+}
+
+function limiter(env: Env, o: LimitOptions): RequestHandler {
   return rateLimit({
     windowMs: env.SIGNIN_RATE_WINDOW_MIN * 60_000,
-    limit: env.SIGNIN_RATE_MAX,
+    limit: env.SIGNIN_RATE_MAX * (o.factor ?? 1),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req, res, _next, options) => {
-      const minutes = Math.ceil(options.windowMs / 60_000);
+    skipSuccessfulRequests: o.skipSuccessful ?? false,
+    keyGenerator: (req) => {
+      const address = ipKeyGenerator(req.ip ?? 'unknown');
+      if (!o.perAccount) return address;
+      const email = typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : '';
+      return `${address}|${email}`;
+    },
+    handler: (req, res, _next, options) => {
+      const resetAt = (req as typeof req & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
+      const msLeft = resetAt ? resetAt.getTime() - Date.now() : options.windowMs;
+      const minutes = Math.max(1, Math.ceil(msLeft / 60_000));
+      const whose = o.perAccount ? 'for this account from this address' : 'from this address';
       res.status(429).json({
-        error: { code: 'rate_limited', message: `Too many ${what} attempts from this address; try again in ${minutes} minutes.` },
+        error: { code: 'rate_limited', message: `Too many ${o.what} attempts ${whose}; try again in ${minutes} minute${minutes === 1 ? '' : 's'}.` },
       });
     },
   });
@@ -26,10 +47,12 @@ function limiter(env: Env, what: string): RequestHandler {
 
 export function authRouter(db: Db, env: Env, mailer: Mailer): Router {
   const r = Router();
-  const signInLimit = limiter(env, 'sign-in');
-  const linkLimit = limiter(env, 'password-reset');
+  // Failed sign-ins per account and address, plus a looser cap per address against trying many accounts.
+  const signInLimit = limiter(env, { what: 'failed sign-in', perAccount: true, skipSuccessful: true });
+  const signInSpray = limiter(env, { what: 'failed sign-in', perAccount: false, skipSuccessful: true, factor: 5 });
+  const linkLimit = limiter(env, { what: 'password-reset', perAccount: false });
 
-  r.post('/sign-in', signInLimit, async (req, res) => {
+  r.post('/sign-in', signInSpray, signInLimit, async (req, res) => {
     const { email, password } = parse(signInBody, req.body);
     const session = await signIn(db, email, password);
     await issueSessionCookie(res, env, await startSession(db, session.user.id));
