@@ -79,3 +79,18 @@ describe('member administration', () => {
     expect(ok.body.role).toBe('viewer');
   });
 });
+
+describe('an invitation whose mail cannot be sent', () => {
+  it('is refused with a 502 that says so, and nothing is saved', async () => {
+    const { inviteMember } = await import('../../server/features/teams/teams.service');
+    const { invitations } = await import('../../server/db/schema');
+    const { eq } = await import('drizzle-orm');
+    const down = { send: async () => Promise.reject(new Error('connect ECONNREFUSED 127.0.0.1:1')) };
+    const [admin] = await ctx.db.select({ id: users.id }).from(users).where(eq(users.email, 'admin@porelith.example'));
+    const email = `unreachable-${Date.now()}@example.org`;
+    const err = await inviteMember(ctx.db, down as never, 'http://127.0.0.1', ctx.demoTeamId, admin.id, { email, name: 'Nobody', role: 'viewer' }).catch((e) => e);
+    expect(err).toMatchObject({ status: 502, code: 'mail_failed' });
+    expect(err.message).toContain(`The invitation to ${email} could not be e-mailed (connect ECONNREFUSED 127.0.0.1:1); nothing was saved.`);
+    expect(await ctx.db.select().from(invitations).where(eq(invitations.email, email))).toEqual([]);
+  });
+});

@@ -3,7 +3,7 @@ import type { Role } from '../../../shared/auth/permissions';
 import type { InviteBody, Member } from '../../../shared/schemas/auth';
 import type { Db } from '../../db/client';
 import { invitations, memberships, teams, users } from '../../db/schema';
-import { conflict, notFound } from '../../lib/httpError';
+import { conflict, HttpError, notFound } from '../../lib/httpError';
 import { newLinkToken } from '../auth/linkTokens';
 import type { Mailer } from '../mail/mailer';
 
@@ -39,21 +39,29 @@ export async function inviteMember(
   const [inviter] = await db.select({ name: users.name }).from(users).where(eq(users.id, invitedBy));
   const { token, hash } = newLinkToken();
   const expiresAt = new Date(Date.now() + INVITE_DAYS * 86_400_000);
-  const [inv] = await db
-    .insert(invitations)
-    .values({ teamId, email: body.email, name: body.name, role: body.role, tokenHash: hash, invitedBy, expiresAt })
-    .returning({ id: invitations.id });
-  // An existing account joins with its current password (which the link never changes); `existing=1`
-  // only picks the matching form in the client, the server decides from the account itself.
-  const link = `${appUrl}/accept-invite?token=${token}${existing ? '&existing=1' : ''}`;
-  const what = existing
-    ? `You already have a Porelith account: open this link within ${INVITE_DAYS} days and confirm with your current password to join; it works once:`
-    : `Open this link within ${INVITE_DAYS} days to set your password; it works once:`;
-  await mailer.send({
-    to: body.email,
-    teamId,
-    subject: `You are invited to the team "${team.name}" on Porelith`,
-    text: `Hello ${body.name},\n\n${inviter?.name ?? 'A team admin'} invited you to join "${team.name}" on Porelith as ${body.role}.\n${what}\n\n${link}\n`,
+  // The invitation is kept only if its mail went out: an invitation nobody received would block a retry.
+  const inv = await db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(invitations)
+      .values({ teamId, email: body.email, name: body.name, role: body.role, tokenHash: hash, invitedBy, expiresAt })
+      .returning({ id: invitations.id });
+    // An existing account joins with its current password (which the link never changes); `existing=1`
+    // only picks the matching form in the client, the server decides from the account itself.
+    const link = `${appUrl}/accept-invite?token=${token}${existing ? '&existing=1' : ''}`;
+    const what = existing
+      ? `You already have a Porelith account: open this link within ${INVITE_DAYS} days and confirm with your current password to join; it works once:`
+      : `Open this link within ${INVITE_DAYS} days to set your password; it works once:`;
+    try {
+      await mailer.send({
+        to: body.email,
+        teamId,
+        subject: `You are invited to the team "${team.name}" on Porelith`,
+        text: `Hello ${body.name},\n\n${inviter?.name ?? 'A team admin'} invited you to join "${team.name}" on Porelith as ${body.role}.\n${what}\n\n${link}\n`,
+      });
+    } catch (err) {
+      throw new HttpError(502, 'mail_failed', `The invitation to ${body.email} could not be e-mailed (${(err as Error).message}); nothing was saved. Check the mail settings and try again.`);
+    }
+    return row;
   });
   return { id: inv.id, email: body.email, role: body.role, expiresAt: expiresAt.toISOString() };
 }
