@@ -87,12 +87,3 @@ export const DARK_PALETTE: AtlasPalette = {
 export function atlasPalette(theme: 'light' | 'dark'): AtlasPalette {
   return theme === 'dark' ? DARK_PALETTE : LIGHT_PALETTE;
 }
-
-/** How the legend names each status. */
-export const STATUS_LABELS: Record<WellStatus, string> = {
-  drilled: 'Drilled',
-  drilling: 'Drilling',
-  suspended: 'Suspended',
-  abandoned: 'Plugged & abandoned',
-  planned: 'Not yet spudded',
-};
