@@ -94,6 +94,14 @@ export const prospectOffsetQuery = z.object({
   bufferKm: z.coerce.number().min(0, 'must be 0 km or more').max(100, 'must be at most 100 km').default(10),
 });
 
+/**
+ * How an offset candidate's score (0 to 1) is made up, as shares of the whole (common practice, no source):
+ * nearness matters most, then a similar water depth, then whether it reached the planned depth, then its data.
+ * The server ranks by it and the offset table explains the ranking from the same table.
+ * @example OFFSET_SCORE_WEIGHTS.near // 0.4
+ */
+export const OFFSET_SCORE_WEIGHTS = { near: 0.4, water: 0.2, depth: 0.2, data: 0.2 } as const;
+
 export const offsetCandidateSchema = z.object({
   wellId: z.string().uuid(),
   name: z.string(),

@@ -106,7 +106,8 @@ describe('the Atlas through the page', () => {
     const picked = [await rows.nth(0).getAttribute('data-well-id'), await rows.nth(1).getAttribute('data-well-id')];
     await rows.nth(0).getByTestId('offset-pick').click();
     await rows.nth(1).getByTestId('offset-pick').click();
-    await rows.nth(0).getByTestId('offset-reason').locator('input').fill('nearest, same water depth');
+    // A ticked well's reason sits on its own line under its row.
+    await page.locator(`[data-testid="offset-reason"][data-well-id="${picked[0]}"]`).locator('input').fill('nearest, same water depth');
     expect(await page.getByTestId('offset-unsaved').count()).toBe(1);
     await page.getByTestId('offset-save').click();
     await expect.poll(() => page.getByTestId('offset-set-entry').count(), { timeout: 10_000 }).toBe(2);

@@ -1,5 +1,5 @@
 import { and, eq, inArray, sql, type SQL } from 'drizzle-orm';
-import type { OffsetCandidate, OffsetSetBody, OffsetSetEntry } from '../../../shared/schemas/planning';
+import { OFFSET_SCORE_WEIGHTS as W, type OffsetCandidate, type OffsetSetBody, type OffsetSetEntry } from '../../../shared/schemas/planning';
 import type { Db } from '../../db/client';
 import { offsetPicks, users, wells } from '../../db/schema';
 import { badRequest } from '../../lib/httpError';
@@ -7,15 +7,15 @@ import { getProspect } from '../prospects/prospects.service';
 import { getPlannedWell } from './plannedWells.service';
 
 /**
- * Rank weights (common practice, no source): nearness matters most, then a similar water depth,
- * then whether the offset reached the planned depth, then how much pressure data it holds.
+ * Rank score, 0 to 1, with the weights of OFFSET_SCORE_WEIGHTS (common practice, no source): nearness matters most,
+ * then a similar water depth, then whether the offset reached the planned depth, then how much pressure data it holds.
  */
 export function offsetScore(c: { distanceKm: number; radiusKm: number; waterDepthDiffM: number | null; tdCoverage: number | null; pressureCount: number; hasLot: boolean; logCount: number }): number {
   const near = 1 - Math.min(1, c.distanceKm / Math.max(c.radiusKm, 1e-9));
   const water = c.waterDepthDiffM === null ? 0.5 : Math.exp(-Math.abs(c.waterDepthDiffM) / 200);
   const depth = c.tdCoverage === null ? 0 : Math.min(1, c.tdCoverage);
   const data = Math.min(1, c.pressureCount / 10) * 0.6 + (c.hasLot ? 0.25 : 0) + (c.logCount > 0 ? 0.15 : 0);
-  return Math.round((0.4 * near + 0.2 * water + 0.2 * depth + 0.2 * data) * 1000) / 1000;
+  return Math.round((W.near * near + W.water * water + W.depth * depth + W.data * data) * 1000) / 1000;
 }
 
 /**
