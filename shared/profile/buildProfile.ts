@@ -36,7 +36,35 @@ export const PROFILE_DEFAULTS = {
   top: { marginKgM3: 0.3 * PPG_KGM3, minThicknessM: 50 },
   /** Spacing of the samples added where no log was run (above its top, below its base), m. */
   fillStepM: 10,
+  /**
+   * When to warn that a curve sits below hydrostatic: by more than 0.3 ppg of EMW (≈ 36 kg/m³, the same size as
+   * the top-of-overpressure margin) over more than 20 % of the samples read. Common practice, no source.
+   */
+  belowNormal: { marginKgM3: 0.3 * PPG_KGM3, minFraction: 0.2 },
 } as const;
+
+const METHOD_NAMES: Record<PoreSettings['method'], string> = {
+  'eaton-sonic': 'Eaton (sonic)',
+  'eaton-resistivity': 'Eaton (resistivity)',
+  bowers: 'Bowers',
+};
+
+/**
+ * Share of the samples where `curvePa` has a value that sit more than `marginKgM3` of EMW below `normalPa`
+ * (EMW from the rig datum), and how many samples had a value.
+ * @example shareBelowNormal(tvdM, porePa, hydrostaticPa, 36).fraction; // 0.62
+ */
+export function shareBelowNormal(tvdM: NumericArray, curvePa: NumericArray, normalPa: NumericArray, marginKgM3: number): { fraction: number; count: number } {
+  let count = 0;
+  let below = 0;
+  for (let i = 0; i < tvdM.length; i++) {
+    const z = tvdM[i];
+    if (!(z > 0) || !Number.isFinite(curvePa[i])) continue;
+    count++;
+    if ((normalPa[i] - curvePa[i]) / (G * z) > marginKgM3) below++;
+  }
+  return { fraction: count ? below / count : 0, count };
+}
 
 export interface BuildProfileInput {
   well: ProfileWell;
@@ -70,6 +98,8 @@ export interface Profile {
   overburdenPa: Float64Array;
   /** The normal compaction trend in the trend log's unit, or null without a trend. */
   normalTrend: Float64Array | null;
+  /** The log the normal trend is on (its values are µs/ft for sonic, ohm·m for resistivity), or null. */
+  normalTrendCurve: TrendSettings['curve'] | null;
   /** r² and point count of the trend's current parameters over its interval. */
   trendFit: { r2: number; n: number } | null;
   /** Log-derived pore pressure, NaN where the method had no (shale) sample; null without a method. */
@@ -252,6 +282,24 @@ export function buildProfile(input: BuildProfileInput): Profile {
     for (let i = 0; i < n; i++) if (tvdM[i] <= mudlineTvdM) fracturePa[i] = NaN;
   }
 
+  // Sub-hydrostatic pressure over much of a basin's shales is rare; a curve there usually means the method's
+  // constants (Bowers' A and B, Eaton's trend) do not fit this basin, and a fracture curve built on it is too low.
+  const { marginKgM3: belowMargin, minFraction } = PROFILE_DEFAULTS.belowNormal;
+  if (porePa && pore) {
+    const share = shareBelowNormal(tvdM, porePa, hydrostaticPa, belowMargin);
+    if (share.count > 0 && share.fraction > minFraction) {
+      const fix = pore.method === 'bowers' ? "calibrate A and B to this basin's formation tests" : 'check the normal trend and the exponent against formation tests';
+      notes.push(`Pore pressure from ${METHOD_NAMES[pore.method]} is below hydrostatic over ${Math.round(share.fraction * 100)} % of the logged interval: ${fix}.`);
+    }
+  }
+  if (fracturePa && porePa) {
+    const logged = Float64Array.from(fracturePa, (v, i) => (Number.isNaN(porePa![i]) ? NaN : v));
+    const share = shareBelowNormal(tvdM, logged, hydrostaticPa, belowMargin);
+    if (share.count > 0 && share.fraction > 0) {
+      notes.push(`Fracture pressure is below hydrostatic over ${Math.max(1, Math.round(share.fraction * 100))} % of the logged interval: it follows the pore pressure, so fix that first.`);
+    }
+  }
+
   const suggestedTop = porePa
     ? topOfOverpressure({
         tvdM,
@@ -281,6 +329,7 @@ export function buildProfile(input: BuildProfileInput): Profile {
     hydrostaticPa,
     overburdenPa,
     normalTrend,
+    normalTrendCurve: normalTrend && trend ? trend.curve : null,
     trendFit,
     porePa,
     poreFilledPa,

@@ -7,6 +7,12 @@ import type { Profile } from './buildProfile';
 export const PROFILE_CAUTION =
   'Predictions guide, they do not decide: verify with the responsible licensed engineer and local regulations.';
 
+/** What exports of the demo team's invented basin say, so a file passed on is never taken for a real well. */
+export const SYNTHETIC_DATA_NOTE = 'Synthetic demo data';
+
+/** The unit of the normal-trend values by the log the trend is on. */
+const TREND_UNIT = { sonic: 'µs/ft', resistivity: 'ohm·m' } as const;
+
 export interface ProfileCsvOptions {
   wellName: string;
   depthUnit: DepthUnit;
@@ -14,6 +20,8 @@ export interface ProfileCsvOptions {
   emwUnit: GradientUnit;
   /** Extra `# key: value` lines, e.g. the interpretation version. */
   meta?: Record<string, string>;
+  /** The data is the demo basin's: says so on the second line. */
+  synthetic?: boolean;
 }
 
 const fmt = (v: number, digits: number) => (Number.isFinite(v) ? v.toFixed(digits) : '');
@@ -25,14 +33,17 @@ function field(s: string): string {
 
 /**
  * The computed curves of a profile as CSV (RFC 4180, CRLF line ends), one row per sample, in the reader's units,
- * with `#` lines on top: the caution, the well, the units and any extra facts. EMW is taken from the rig datum.
+ * with `#` lines on top: the caution, "synthetic" for demo data, the well, the units and any extra facts. EMW is
+ * taken from the rig datum.
  * @example
  * profileCsv(profile, { wellName: 'AVX-08', depthUnit: 'm', pressureUnit: 'MPa', emwUnit: 'sg' }).split('\r\n')[0];
  * // '# Predictions guide, they do not decide: …'
  */
 export function profileCsv(profile: Profile, options: ProfileCsvOptions): string {
   const { depthUnit: du, pressureUnit: pu, emwUnit: eu } = options;
-  const lines: string[] = [`# ${PROFILE_CAUTION}`, `# Well: ${options.wellName}`];
+  const lines: string[] = [`# ${PROFILE_CAUTION}`];
+  if (options.synthetic) lines.push(`# ${SYNTHETIC_DATA_NOTE}: an invented basin, not a real well.`);
+  lines.push(`# Well: ${options.wellName}`);
   for (const [k, v] of Object.entries(options.meta ?? {})) lines.push(`# ${k}: ${v}`);
   lines.push(`# Depths from the rig datum unless stated; EMW = pressure / (g × TVD below the rig datum), g = ${G} m/s²`);
   const curves: [string, Float64Array | null][] = [
@@ -52,7 +63,7 @@ export function profileCsv(profile: Profile, options: ProfileCsvOptions): string
     'Density (kg/m3)',
     'Density source',
   ];
-  if (profile.normalTrend) header.push('Normal trend');
+  if (profile.normalTrend) header.push(profile.normalTrendCurve ? `Normal trend (${TREND_UNIT[profile.normalTrendCurve]})` : 'Normal trend');
   lines.push(header.map(field).join(','));
   const dDigits = 2;
   const pDigits = pu === 'Pa' || pu === 'kPa' || pu === 'psi' ? 1 : 4;

@@ -7,7 +7,8 @@ import {
   PPG_KGM3,
   topOfOverpressure,
 } from '@shared/pressure';
-import { buildProfile, type BuildProfileInput } from '@shared/profile';
+import { buildProfile, shareBelowNormal, type BuildProfileInput } from '@shared/profile';
+import { PSI_PA } from '@shared/units';
 
 // An offshore well: rotary table 25 m above the sea, 100 m of water, so the mudline is 125 m below the datum.
 const well = { datumElevationM: 25, waterDepthM: 100, airGapM: 25 };
@@ -195,6 +196,35 @@ describe('buildProfile: pore pressure, fracture and top', () => {
       input({ interpretation: { ...input().interpretation, trend: null, pore: { method: 'bowers', v0: 5000, A: 4.4561, B: 0.8168, unloading: null } } }),
     );
     expect(Number.isFinite(q.porePa![indexOf(q, 2000)])).toBe(true);
+  });
+
+  it('warns in plain words when Bowers puts pore pressure below hydrostatic over much of the log', () => {
+    // Sonic built from Bowers 1995 loading (V = V0 + A·σ^B, ft/s and psi) on a pore curve that is normal to 1000 m
+    // and 60 kg/m³ of EMW below normal under it, so the same coefficients give that curve back.
+    const bowers = { v0: 5000, A: 4.4561, B: 0.8168 };
+    const low = (z: number) => normalByHand(z) - (z > 1000 ? 60 * G * z : 0);
+    const sonic = tvdM.map((z) => 1e6 / (bowers.v0 + bowers.A * ((overburdenByHand(z) - low(z)) / PSI_PA) ** bowers.B));
+    const q = buildProfile(
+      input({
+        logs: { sonicUsFt: sonic, densityKgM3: new Float64Array(tvdM.length).fill(RHO) },
+        interpretation: { ...input().interpretation, trend: null, pore: { method: 'bowers', ...bowers, unloading: null } },
+      }),
+    );
+    expect(q.porePa![indexOf(q, 2000)]).toBeCloseTo(low(2000), -2);
+    // Samples 126–3000 m carry a pore value; 1001–3000 m of them are below: 2000 / 2875 = 70 %.
+    expect(q.notes).toContain("Pore pressure from Bowers is below hydrostatic over 70 % of the logged interval: calibrate A and B to this basin's formation tests.");
+    expect(q.notes.some((n) => n.startsWith('Fracture pressure is below hydrostatic'))).toBe(false);
+  });
+
+  it('no below-hydrostatic note for a normally pressured or overpressured curve', () => {
+    expect(p.notes.some((n) => n.includes('below hydrostatic'))).toBe(false);
+  });
+
+  it('shareBelowNormal counts samples more than the margin of EMW below normal', () => {
+    const z = Float64Array.of(0, 1000, 2000, 3000);
+    const normal = z.map((v) => 1030 * G * v);
+    const curve = Float64Array.of(0, 1030 * G * 1000, 990 * G * 2000, NaN);
+    expect(shareBelowNormal(z, curve, normal, 36)).toEqual({ fraction: 0.5, count: 2 });
   });
 
   it('rejects unsorted depths with an exact message', () => {

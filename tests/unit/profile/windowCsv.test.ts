@@ -63,4 +63,33 @@ describe('profileCsv', () => {
     expect(Number(last[6])).toBeCloseTo(8.3808, 3);
     expect(last[9]).toBe('compaction trend');
   });
+
+  it('says the data is synthetic on the second line when it is the demo basin', () => {
+    const demo = profileCsv(p, { wellName: 'AVX-08', depthUnit: 'm', pressureUnit: 'MPa', emwUnit: 'sg', synthetic: true }).split('\r\n');
+    expect(demo[0]).toBe(`# ${PROFILE_CAUTION}`);
+    expect(demo[1]).toBe('# Synthetic demo data: an invented basin, not a real well.');
+    expect(demo[2]).toBe('# Well: AVX-08');
+    expect(lines.some((l) => l.includes('Synthetic'))).toBe(false);
+  });
+
+  it('gives the normal trend column the unit of its log', () => {
+    const withTrend = (curve: 'sonic' | 'resistivity') =>
+      buildProfile({
+        well: { datumElevationM: 25, waterDepthM: 100, airGapM: 25 },
+        tvdM: [],
+        logs: {},
+        baseTvdM: 1000,
+        interpretation: {
+          normalDensityKgM3: 1030,
+          trend: curve === 'sonic'
+            ? { curve, model: 'exponential', fromM: 300, toM: 900, params: { matrix: 60, surface: 190, cPerM: 4.5e-4 }, gammaCutoffApi: null }
+            : { curve, model: 'loglinear', fromM: 300, toM: 900, params: { a: 0, b: 1e-4 }, gammaCutoffApi: null },
+          pore: null,
+          fracture: null,
+        },
+      });
+    const header = (curve: 'sonic' | 'resistivity') => profileCsv(withTrend(curve), { wellName: 'W', depthUnit: 'm', pressureUnit: 'MPa', emwUnit: 'sg' }).split('\r\n')[3];
+    expect(header('sonic').endsWith(',Normal trend (µs/ft)')).toBe(true);
+    expect(header('resistivity').endsWith(',Normal trend (ohm·m)')).toBe(true);
+  });
 });
