@@ -137,4 +137,22 @@ describe('seeding the demo basin', () => {
     const withPick = cands.find((c: { topTvdssM: number | null }) => c.topTvdssM !== null);
     expect(withPick.topTvdssM).toBeGreaterThan(1500);
   });
+
+  it("drills every demo planned well to at least 150 m below the base of its prospect's target", async () => {
+    const team = await freshTeamAgent(ctx, 'Demo planned TD', 'planner');
+    createdTeams.push(team.teamId);
+    await seedDemoBasin(ctx.db, team.teamId);
+    const prospects: { id: string; name: string; targetBaseM: number }[] = (await team.agent.get(`/api/teams/${team.teamId}/prospects`)).body;
+    const planned: { name: string; prospectId: string; plannedTdM: number; datumElevationM: number }[] = (await team.agent.get(`/api/teams/${team.teamId}/planned-wells`)).body;
+    expect(planned.length).toBeGreaterThan(0);
+    for (const w of planned) {
+      const p = prospects.find((x) => x.id === w.prospectId)!;
+      // Planned TD is MD below the rotary table; the demo wells are vertical, so TVDSS = MD − RT elevation.
+      const tdTvdssM = w.plannedTdM - w.datumElevationM;
+      expect(tdTvdssM - p.targetBaseM, `${w.name} in ${p.name}`).toBeGreaterThanOrEqual(150);
+    }
+    // The Fennick Fan target's base is 4,200 m TVDSS: its planned TD must pass 4,350 m TVDSS plus the RT height.
+    const fennick = planned.find((w) => w.name.startsWith('Fennick Fan-1'))!;
+    expect(fennick.plannedTdM).toBeGreaterThanOrEqual(4_350 + fennick.datumElevationM);
+  });
 });

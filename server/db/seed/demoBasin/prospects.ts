@@ -6,8 +6,18 @@ export interface DemoProspect {
   /** Closed ring of [lon, lat] (first point repeated last), WGS 84, counter-clockwise (RFC 7946). */
   polygon: [number, number][];
   targetTvdssM: { top: number; base: number };
-  plannedWells: { name: string; lon: number; lat: number; targetTvdssM: number }[];
+  /**
+   * `targetTvdssM` is where the well aims inside the target; `tdTvdssM` is where it stops, below the target's base
+   * so the whole interval is drilled and logged. Both are metres below sea level (the wells are vertical).
+   */
+  plannedWells: { name: string; lon: number; lat: number; targetTvdssM: number; tdTvdssM: number }[];
 }
+
+/**
+ * How far below the base of the target a demo planned well is drilled: room to log the whole target and set
+ * casing or a plug below it (common practice, no source).
+ */
+export const TD_BELOW_TARGET_BASE_M = 200;
 
 interface ProspectShape {
   name: string;
@@ -77,6 +87,6 @@ export const demoProspects: readonly DemoProspect[] = SHAPES.map((s) => ({
   targetTvdssM: s.targetTvdssM,
   plannedWells: s.planned.map((p) => {
     const at = toLonLat(s.centreM.xM + p.dxM, s.centreM.yM + p.dyM);
-    return { name: p.name, lon: round6(at.lon), lat: round6(at.lat), targetTvdssM: p.targetTvdssM };
+    return { name: p.name, lon: round6(at.lon), lat: round6(at.lat), targetTvdssM: p.targetTvdssM, tdTvdssM: s.targetTvdssM.base + TD_BELOW_TARGET_BASE_M };
   }),
 }));

@@ -43,7 +43,8 @@ export async function writeDemoProspects(tx: Tx, teamId: string): Promise<{ pros
         datumElevationM: PLANNED_RT_M,
         waterDepthM: depth === null || depth === undefined ? null : Number(depth),
         waterDepthSource: depth === null || depth === undefined ? 'unknown' : 'nearest-wells',
-        plannedTdM: w.targetTvdssM + PLANNED_RT_M,
+        // Planned TD is MD below the rotary table: a vertical well's TVDSS plus the height of the RT above sea level.
+        plannedTdM: w.tdTvdssM + PLANNED_RT_M,
         notes: 'Synthetic demo planned well (invented).',
       });
       planned++;
