@@ -190,3 +190,50 @@ export function onSessionExpired(handler: ((error: ApiClientError) => void) | nu
 
 /** The app-wide client. */
 export const api: ApiClient = createApiClient({ onSessionExpired: (error) => sessionExpiredHandler?.(error) });
+
+export interface MultipartOptions<T> {
+  schema: ZodType<T>;
+  /** The message for a refusal whose body is not our `{ error }` shape (a proxy's page, a crash). */
+  bareFailure: (status: number) => string;
+  /** The error for a well-formed `{ error }` refusal; by default an ApiClientError naming the fields. */
+  toError?: (status: number, code: string, message: string, details: unknown) => Error;
+  fetchImpl?: typeof fetch;
+}
+
+/**
+ * A multipart POST (a file upload). The JSON client cannot carry a file, so this calls fetch itself, with the
+ * same cookie rule, the same error shape and the same "session ended" handling (a 401 is passed through a cheap
+ * GET of the same path, which lets the shared client redirect to sign-in).
+ * @example const layer = await postMultipart(`/api/teams/${teamId}/layers`, form, { schema: referenceLayerSchema, bareFailure });
+ */
+export async function postMultipart<T>(url: string, form: FormData, o: MultipartOptions<T>): Promise<T> {
+  const fetchImpl = o.fetchImpl ?? ((input, init) => globalThis.fetch(input, init));
+  let response: Response;
+  try {
+    response = await fetchImpl(url, { method: 'POST', body: form, credentials: 'same-origin', headers: { Accept: 'application/json' } });
+  } catch {
+    throw new ApiClientError(NETWORK_FAILURE_STATUS, 'network_error', 'Cannot reach the Porelith server. Check your connection and try again.');
+  }
+  const text = await response.text();
+  let body: unknown;
+  try {
+    body = text ? JSON.parse(text) : undefined;
+  } catch {
+    body = undefined;
+  }
+  if (!response.ok) {
+    if (response.status === 401) void api.get(url).catch(() => undefined);
+    const parsed = apiErrorSchema.safeParse(body);
+    if (!parsed.success) throw new ApiClientError(response.status, `http_${response.status}`, o.bareFailure(response.status));
+    const { code, message, details } = parsed.data.error;
+    if (o.toError) throw o.toError(response.status, code, message, details);
+    const issues = toFieldIssues(details);
+    throw new ApiClientError(response.status, code, describeApiError(message, issues), issues);
+  }
+  const checked = o.schema.safeParse(body);
+  if (!checked.success) {
+    const first = checked.error.issues[0];
+    throw new ApiClientError(response.status, 'unexpected_reply', `The server sent a reply this page does not understand (${first?.path.join('.') ?? ''}: ${first?.message ?? 'invalid'}).`);
+  }
+  return checked.data;
+}

@@ -1,8 +1,7 @@
 import { z, type ZodType } from 'zod';
-import { apiErrorSchema } from '@shared/schemas/auth';
 import { IMPORT_KINDS, type ImportKind } from '@shared/schemas/imports';
 import { CURVE_ROLES } from '@shared/schemas/wells';
-import { api, ApiClientError, describeApiError, NETWORK_FAILURE_STATUS, toFieldIssues } from './client';
+import { api, ApiClientError, describeApiError, postMultipart, toFieldIssues } from './client';
 
 // Reply shapes of POST /imports and friends. Kept here until the contract gains shared schemas for them
 // (the server builds these objects in server/features/imports/imports.service.ts).
@@ -193,46 +192,13 @@ export function importError(status: number, code: string, message: string, detai
 
 const teamPath = (teamId: string) => `/api/teams/${encodeURIComponent(teamId)}`;
 
-/**
- * Multipart POST. The shared JSON client cannot carry a file, so this one call uses fetch itself,
- * with the same cookie rule and the same error shape.
- */
-async function postForm<T>(teamId: string, form: FormData, schema: ZodType<T>): Promise<T> {
-  let response: Response;
-  try {
-    response = await globalThis.fetch(`${teamPath(teamId)}/imports`, {
-      method: 'POST',
-      body: form,
-      credentials: 'same-origin',
-      headers: { Accept: 'application/json' },
-    });
-  } catch {
-    throw new ApiClientError(NETWORK_FAILURE_STATUS, 'network_error', 'Cannot reach the Porelith server. Check your connection and try again.');
-  }
-  const text = await response.text();
-  let body: unknown;
-  try {
-    body = text ? JSON.parse(text) : undefined;
-  } catch {
-    body = undefined;
-  }
-  if (!response.ok) {
-    // The shared client owns the "session ended" redirect; a cheap call through it lets that happen.
-    if (response.status === 401) void api.get(`${teamPath(teamId)}/imports`).catch(() => undefined);
-    const parsed = apiErrorSchema.safeParse(body);
-    if (!parsed.success) {
-      const message = response.status === 413 ? 'The file is too large to import.' : `The upload failed (HTTP ${response.status}).`;
-      throw new ApiClientError(response.status, `http_${response.status}`, message);
-    }
-    const { code, message, details } = parsed.data.error;
-    throw importError(response.status, code, message, details);
-  }
-  const checked = schema.safeParse(body);
-  if (!checked.success) {
-    const first = checked.error.issues[0];
-    throw new ApiClientError(response.status, 'unexpected_reply', `The server sent a reply this page does not understand (${first?.path.join('.') ?? ''}: ${first?.message ?? 'invalid'}).`);
-  }
-  return checked.data;
+/** A multipart POST of an import (preview or job), with the import's own error that carries line problems. */
+function postForm<T>(teamId: string, form: FormData, schema: ZodType<T>): Promise<T> {
+  return postMultipart(`${teamPath(teamId)}/imports`, form, {
+    schema,
+    bareFailure: (status) => (status === 413 ? 'The file is too large to import.' : `The upload failed (HTTP ${status}).`),
+    toError: importError,
+  });
 }
 
 function formOf(request: ImportRequest, file: File, mode: 'preview' | 'job'): FormData {

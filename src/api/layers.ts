@@ -1,7 +1,6 @@
 import { z } from 'zod';
-import { apiErrorSchema } from '@shared/schemas/auth';
 import { referenceLayerSchema, type ReferenceLayer } from '@shared/schemas/planning';
-import { api, ApiClientError, describeApiError, NETWORK_FAILURE_STATUS, toFieldIssues, type ApiClient } from './client';
+import { api, ApiClientError, postMultipart, type ApiClient } from './client';
 
 const layersPath = (teamId: string) => `/api/teams/${encodeURIComponent(teamId)}/layers`;
 
@@ -53,32 +52,5 @@ export async function uploadReferenceLayer(
   form.append('kind', fields.kind);
   form.append('color', fields.color);
   form.append('file', file, file.name ?? 'layer.geojson');
-  let response: Response;
-  try {
-    response = await fetchImpl(layersPath(teamId), { method: 'POST', body: form, credentials: 'same-origin', headers: { Accept: 'application/json' } });
-  } catch {
-    throw new ApiClientError(NETWORK_FAILURE_STATUS, 'network_error', 'Cannot reach the Porelith server. Check your connection and try again.');
-  }
-  const text = await response.text();
-  let body: unknown;
-  try {
-    body = text ? JSON.parse(text) : undefined;
-  } catch {
-    body = undefined;
-  }
-  if (!response.ok) {
-    // The shared client owns the "session ended" redirect; a cheap call through it lets that happen.
-    if (response.status === 401) void api.get(layersPath(teamId)).catch(() => undefined);
-    const parsed = apiErrorSchema.safeParse(body);
-    if (!parsed.success) throw new ApiClientError(response.status, `http_${response.status}`, bareFailure(response.status));
-    const { code, message, details } = parsed.data.error;
-    const issues = toFieldIssues(details);
-    throw new ApiClientError(response.status, code, describeApiError(message, issues), issues);
-  }
-  const checked = referenceLayerSchema.safeParse(body);
-  if (!checked.success) {
-    const first = checked.error.issues[0];
-    throw new ApiClientError(response.status, 'unexpected_reply', `The server sent a reply this page does not understand (${first?.path.join('.') ?? ''}: ${first?.message ?? 'invalid'}).`);
-  }
-  return checked.data;
+  return postMultipart(layersPath(teamId), form, { schema: referenceLayerSchema, bareFailure, fetchImpl });
 }
