@@ -20,6 +20,10 @@ describe('figure export', () => {
   it('refuses a figure without the caution', () => {
     expect(() => svgText(svgWith('just a plot'))).toThrow('The figure lost its caution line; not exported.');
   });
+  it('refuses a demo-data figure that does not say it is synthetic', () => {
+    expect(() => svgText(svgWith(PROFILE_CAUTION), { synthetic: true })).toThrow('The figure of demo data does not say it is synthetic; not exported.');
+    expect(svgText(svgWith(`${PROFILE_CAUTION} Synthetic demo data`), { synthetic: true })).toContain('Synthetic demo data');
+  });
   it('makes file-safe names', () => {
     expect(fileStem('AVX-08 / side track')).toBe('AVX-08_side_track');
   });

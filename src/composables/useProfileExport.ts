@@ -1,4 +1,4 @@
-import { PROFILE_CAUTION } from '@shared/profile';
+import { PROFILE_CAUTION, SYNTHETIC_DATA_NOTE } from '@shared/profile';
 
 /** File-name safe form of a well name. */
 export function fileStem(name: string): string {
@@ -16,15 +16,21 @@ function download(blob: Blob, fileName: string): void {
   setTimeout(() => URL.revokeObjectURL(url), 1000);
 }
 
+export interface FigureExportOptions {
+  /** Demo data: the figure must say "Synthetic demo data". */
+  synthetic?: boolean;
+}
+
 /**
- * The figure as standalone SVG text. The figure draws with literal colours and carries the caution line
- * itself; this only checks that it is there, so no export can leave it out.
- * @example const text = svgText(figure.svg);
+ * The figure as standalone SVG text. The figure draws with literal colours and carries the caution line (and, for
+ * the demo basin, the synthetic-data line) itself; this only checks that they are there, so no export leaves them out.
+ * @example const text = svgText(figure.svg, { synthetic: true });
  */
-export function svgText(svg: SVGSVGElement): string {
+export function svgText(svg: SVGSVGElement, options: FigureExportOptions = {}): string {
   const copy = svg.cloneNode(true) as SVGSVGElement;
   copy.setAttribute('xmlns', 'http://www.w3.org/2000/svg');
   if (!copy.textContent?.includes(PROFILE_CAUTION)) throw new Error('The figure lost its caution line; not exported.');
+  if (options.synthetic && !copy.textContent.includes(SYNTHETIC_DATA_NOTE)) throw new Error('The figure of demo data does not say it is synthetic; not exported.');
   return `<?xml version="1.0" encoding="UTF-8"?>\n${new XMLSerializer().serializeToString(copy)}`;
 }
 
@@ -34,14 +40,14 @@ export function svgText(svg: SVGSVGElement): string {
  * @example const { exportPng } = useProfileExport(); await exportPng(figure.svg, 'AVX-08_profile');
  */
 export function useProfileExport() {
-  function exportSvg(svg: SVGSVGElement, stem: string): void {
-    download(new Blob([svgText(svg)], { type: 'image/svg+xml' }), `${stem}.svg`);
+  function exportSvg(svg: SVGSVGElement, stem: string, options: FigureExportOptions = {}): void {
+    download(new Blob([svgText(svg, options)], { type: 'image/svg+xml' }), `${stem}.svg`);
   }
 
-  async function exportPng(svg: SVGSVGElement, stem: string, scale = 2): Promise<void> {
+  async function exportPng(svg: SVGSVGElement, stem: string, options: FigureExportOptions = {}, scale = 2): Promise<void> {
     const width = Number(svg.getAttribute('width'));
     const height = Number(svg.getAttribute('height'));
-    const url = URL.createObjectURL(new Blob([svgText(svg)], { type: 'image/svg+xml' }));
+    const url = URL.createObjectURL(new Blob([svgText(svg, options)], { type: 'image/svg+xml' }));
     try {
       const img = new Image();
       await new Promise<void>((resolve, reject) => {

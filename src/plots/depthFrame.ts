@@ -1,5 +1,5 @@
 import { convert } from '@shared/units';
-import type { WellDatums } from '@shared/profile';
+import { interpolateAt, type WellDatums } from '@shared/profile';
 import type { DisplayDepthUnit } from '@/stores/units';
 
 /** Depth down the plot: true vertical or measured along the bore. */
@@ -58,4 +58,23 @@ export function tvdFromDisplay(value: number, frame: DepthFrame, datums: WellDat
 export function depthAxisLabel(frame: DepthFrame): string {
   if (frame.mode === 'md') return `MD from rotary table (${frame.unit})`;
   return `TVD below ${DATUM_LABELS[frame.datum]} (${frame.unit})`;
+}
+
+/**
+ * A TVD (below the rig datum, m) as the plot shows it: in MD frames its MD along the profile's own grid (the
+ * survey), else the TVD from the frame's datum; in the frame's unit.
+ * @example depthOfTvd(2000, { tvdM: [0, 2000], mdM: [0, 2100] }, { mode: 'md', datum: 'rt', unit: 'm' }, datums); // 2100
+ */
+export function depthOfTvd(tvdM: number, grid: { tvdM: ArrayLike<number>; mdM: ArrayLike<number> }, frame: DepthFrame, datums: WellDatums): number {
+  const mdM = frame.mode === 'md' ? interpolateAt(grid.tvdM, grid.mdM, tvdM) : tvdM;
+  return displayDepth(tvdM, mdM, frame, datums);
+}
+
+/**
+ * A displayed depth as text with its unit, marked "MD" in MD frames so it is never read as vertical depth.
+ * @example depthText(2046.4, { mode: 'md', datum: 'rt', unit: 'm' }); // '2,046 m MD'
+ */
+export function depthText(value: number, frame: DepthFrame): string {
+  if (!Number.isFinite(value)) return '—';
+  return `${value.toLocaleString('en', { maximumFractionDigits: 0 })} ${frame.unit}${frame.mode === 'md' ? ' MD' : ''}`;
 }

@@ -68,4 +68,46 @@ describe('ProfileFigure', () => {
     expect(w.findAll('[data-testid="observations"] path')).toHaveLength(3);
     expect(w.get('[data-testid="top-marker"]').text()).toBe('TOP 5,823 ft');
   });
+
+  it('says "Synthetic demo data" in the figure only for demo data', () => {
+    expect(mountFigure({ synthetic: true }).get('[data-testid="figure-synthetic"]').text()).toBe('Synthetic demo data');
+    expect(mountFigure().find('[data-testid="figure-synthetic"]').exists()).toBe(false);
+  });
+
+  it('draws formation-top names and the TOP label over the curves, each on a halo', () => {
+    const w = mountFigure();
+    const html = w.get('[data-testid="pressure-plot"]').html();
+    const label = w.get('[data-testid="formation-top-label"]');
+    expect(label.text()).toBe('Pellam Clay');
+    expect(label.attributes('paint-order')).toBe('stroke');
+    expect(label.attributes('stroke')).toBe('#FFFFFF');
+    // drawn after (so over) the pore and fracture curves
+    expect(html.indexOf('formation-top-label')).toBeGreaterThan(html.indexOf('curve-pore'));
+    expect(w.get('[data-testid="top-label"]').attributes('paint-order')).toBe('stroke');
+  });
+
+  it('in MD mode plots on MD: the depth axis and the TOP line follow the bore', () => {
+    const deviated = buildProfile({
+      well: { datumElevationM: 25, waterDepthM: 100, airGapM: 25 },
+      tvdM,
+      // vertical to 1000 m, then 1.5 m along the hole per metre down (about 48° from vertical)
+      mdM: tvdM.map((z) => (z < 1000 ? z : 1000 + 1.5 * (z - 1000))),
+      logs: { sonicUsFt: tvdM.map((z) => 60 + 130 * Math.exp(-4.5e-4 * (z - 125))) },
+      interpretation: { normalDensityKgM3: 1030, trend: null, pore: null, fracture: null },
+    });
+    const at = (mode: 'tvd' | 'md') => {
+      const w = mountFigure({ profile: deviated, frame: { mode, datum: 'rt', unit: 'm' }, pick: { tvdM: 1500, label: 'TOP' } });
+      const line = w.get('[data-testid="top-marker"] line');
+      return { label: w.get('[data-testid="depth-axis-label"]').text(), y: Number(line.attributes('y1')) };
+    };
+    // plot area from y = 74 to 646 (profileLayout at 680 px); the axis runs from 0 to the deepest sample
+    const yOf = (depth: number, deepest: number) => 74 + (depth / deepest) * (646 - 74);
+    const tvd = at('tvd');
+    const md = at('md');
+    expect(tvd.label).toBe('TVD below rotary table (m)');
+    expect(md.label).toBe('MD from rotary table (m)');
+    expect(tvd.y).toBeCloseTo(yOf(1500, 2399), 6);
+    // 1500 m TVD is 1750 m MD; the deepest sample 2399 m TVD is 3098.5 m MD
+    expect(md.y).toBeCloseTo(yOf(1750, 3098.5), 6);
+  });
 });
