@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { G } from '@shared/units';
 import { buildProfile } from '@shared/profile';
 import type { PressureObservation } from '@shared/schemas/wells';
-import { parseWellIds, summarise } from './useProfileCompare';
+import { parseWellIds, summarise, windowBasisText } from './useProfileCompare';
 import { pickCurves, profileWell } from './useProfileData';
 import { readProfilePreferences } from './useProfileUnits';
 
@@ -37,6 +37,20 @@ describe('comparison helpers', () => {
     expect(s.maxEmwBasis).toBe('interpreted');
     expect(s.windowBasis).toBe('interpreted');
     expect(s.window.widthKgM3).toBe(profile.window.widthKgM3);
+  });
+});
+
+describe('window basis text', () => {
+  // Offshore: RT 25 m above the sea, mudline 546 m below RT.
+  const datums = { seaLevelTvdM: 25, mudlineTvdM: 546 };
+  it('names the depth of the narrowest window in the page unit and datum', () => {
+    expect(windowBasisText('interpreted', 3655, { mode: 'tvd', datum: 'sl', unit: 'm' }, datums)).toBe('fracture − pore at 3,630 m TVD below sea level (interpreted)');
+    // 3655 − 546 = 3109 m = 10,200 ft (1 ft = 0.3048 m)
+    expect(windowBasisText('interpreted', 3655, { mode: 'tvd', datum: 'ml', unit: 'ft' }, datums)).toBe('fracture − pore at 10,200 ft TVD below mudline (interpreted)');
+  });
+  it('for a measured window, the shoe test depth', () => {
+    expect(windowBasisText('LOT and mud weights', 1525, { mode: 'tvd', datum: 'sl', unit: 'm' }, datums)).toBe('shoe test at 1,500 m TVD below sea level − heaviest mud below it');
+    expect(windowBasisText('none', NaN, { mode: 'tvd', datum: 'sl', unit: 'm' }, datums)).toBe('no data');
   });
 });
 

@@ -12,10 +12,12 @@ import {
   type LogCurveInput,
   type Profile,
   type ProfileLogRole,
+  type WellDatums,
 } from '@shared/profile';
 import * as wellsApi from '@/api/wells';
 import * as profileApi from '@/api/profile';
 import type { LoadState } from '@/stores/session';
+import { DATUM_LABELS, displayDepth, type DepthFrame } from '@/plots/depthFrame';
 import { pickCurves, profileWell } from './useProfileData';
 
 /** One well of the comparison with what the table and the plot need. */
@@ -58,6 +60,19 @@ export function summarise(profile: Profile | null, pressures: readonly PressureO
   const windowBasis: CompareWell['windowBasis'] =
     window === interpretedWindow ? 'interpreted' : Number.isFinite(measured.widthKgM3) ? 'LOT and mud weights' : 'none';
   return { maxEmwKgM3: Number.isFinite(maxEmwKgM3) ? maxEmwKgM3 : NaN, maxEmwBasis, window, windowBasis };
+}
+
+/**
+ * What a well's window was read from, with the depth of its narrowest point in the page's unit and datum.
+ * @example windowBasisText('interpreted', 3655, { mode: 'tvd', datum: 'sl', unit: 'm' }, { seaLevelTvdM: 25, mudlineTvdM: 546 });
+ * // 'fracture − pore at 3,630 m TVD below sea level (interpreted)'
+ */
+export function windowBasisText(basis: CompareWell['windowBasis'], widthTvdM: number, frame: DepthFrame, datums: WellDatums): string {
+  if (basis === 'none') return 'no data';
+  const at = Number.isFinite(widthTvdM)
+    ? ` at ${displayDepth(widthTvdM, widthTvdM, frame, datums).toLocaleString('en', { maximumFractionDigits: 0 })} ${frame.unit} TVD below ${DATUM_LABELS[frame.datum]}`
+    : '';
+  return basis === 'interpreted' ? `fracture − pore${at} (interpreted)` : `shoe test${at} − heaviest mud below it`;
 }
 
 async function loadOne(teamId: string, wellId: string): Promise<CompareWell> {
