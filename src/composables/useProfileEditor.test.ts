@@ -3,7 +3,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { nextTick, ref } from 'vue';
 import type { Interpretation } from '@shared/schemas/interpretations';
 import { errorReply, installFakeServer, jsonReply, TEAM_A } from '@/testing/fakeServer';
-import { defaultContent, useProfileEditor } from './useProfileEditor';
+import { defaultContent, savedByText, useProfileEditor } from './useProfileEditor';
 
 const WELL = '3f1d2c4b-5a6e-4f70-8a9b-0c1d2e3f4a5b';
 const path = `/api/teams/${TEAM_A}/wells/${WELL}/interpretations`;
@@ -92,5 +92,16 @@ describe('useProfileEditor', () => {
     expect(editor.baseVersion.value).toBeNull();
     // Eaton 1975, SPE 5544: exponent 3 on sonic; the 20 m running median is common practice, no source.
     expect(editor.content.value.pore).toEqual({ method: 'eaton-sonic', exponent: 3, smoothingM: 20 });
+  });
+});
+
+describe('who saved a version', () => {
+  it('names the author when recorded', () => {
+    expect(savedByText(version(3), 'UTC')).toBe('saved by Tomas, 2 Jan 2026, 10:00 (v3)');
+  });
+  it('says the author is not recorded, with the note, instead of "someone"', () => {
+    const seeded = version(1, { createdByName: null, note: 'Synthetic demo: automatic pick' });
+    expect(savedByText(seeded, 'UTC')).toBe('saved in v1 (Synthetic demo: automatic pick), 2 Jan 2026, 10:00; author not recorded');
+    expect(savedByText({ ...seeded, note: null }, 'UTC')).toBe('saved in v1, 2 Jan 2026, 10:00; author not recorded');
   });
 });

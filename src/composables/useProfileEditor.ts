@@ -20,6 +20,18 @@ export function defaultContent(): InterpretationContent {
   };
 }
 
+/**
+ * Who saved a version and when, for the TOP tab. Versions written by the demo seed or imported have no recorded
+ * author: say so, with the version's note where there is one, rather than a vague "someone".
+ * @example savedByText({ version: 1, createdByName: null, createdAt: '2026-12-02T05:40:00Z', note: 'Synthetic demo: automatic pick' });
+ * // 'saved in v1 (Synthetic demo: automatic pick), 2 Dec 2026, 05:40; author not recorded'
+ */
+export function savedByText(v: Pick<Interpretation, 'version' | 'createdByName' | 'createdAt' | 'note'>, timeZone?: string): string {
+  const when = new Date(v.createdAt).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone });
+  if (v.createdByName) return `saved by ${v.createdByName}, ${when} (v${v.version})`;
+  return `saved in v${v.version}${v.note ? ` (${v.note})` : ''}, ${when}; author not recorded`;
+}
+
 /** The content fields of a saved version (drops id, version, who and when). */
 export function contentOf(v: Interpretation): InterpretationContent {
   return {
