@@ -96,6 +96,16 @@ describe('WellDetailView', { timeout: 30_000 }, () => {
     expect(wrapper.find('[data-testid="well-edit-open"]').exists()).toBe(false);
   });
 
+  it("leads to the well's pressure profile from its header, for viewers too", async () => {
+    routes('viewer', () => errorReply(403, 'forbidden', 'no'), () => well(3));
+    const { wrapper, router } = await mountInApp(WellDetailView, { props: { wellId: WELL_ID }, path: `/wells/${WELL_ID}` });
+    await vi.waitFor(() => expect(wrapper.find('[data-testid="well-profile-open"]').exists()).toBe(true));
+    const button = wrapper.get('[data-testid="well-profile-open"]');
+    expect(button.text()).toBe('Pressure profile');
+    expect(button.attributes('href')).toBe(`/wells/${WELL_ID}/profile`);
+    expect(router.resolve(button.attributes('href')!).name).toBe('well-profile');
+  });
+
   it('tells the editor that someone else saved first, stores nothing, and reloads the current header', async () => {
     let stored = well(3);
     const patches: unknown[] = [];
