@@ -25,12 +25,12 @@ describe('OffsetCandidatesTable', () => {
   it('shows the score, the datum of the TOP, and data chips without error colours', () => {
     const wrapper = mountTable([]);
     const headers = wrapper.findAll('th').map((th) => th.text());
-    expect(headers).toContain('Score');
+    expect(headers).toContain('#score');
     expect(headers).toContain('TOP (m TVDSS)');
     const rows = wrapper.findAll('[data-testid="offset-row"]');
     expect(rows.map((r) => r.attributes('data-rank'))).toEqual(['1', '2']);
     const cells = rows[0].findAll('td').map((c) => c.text());
-    expect(cells).toContain('0.82');
+    expect(rows.map((r) => r.get('[data-testid="offset-score"]').text())).toEqual(['0.82', '0.61']);
     expect(cells[cells.length - 1]).toBe('3,120');
     expect(rows[1].findAll('td').map((c) => c.text()).at(-1)).toBe('—');
     expect(rows[0].get('[data-chip="lot"]').text()).toBe('LOT');
