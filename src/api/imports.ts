@@ -85,6 +85,8 @@ const outcomeSchema = z
     updated: z.number().optional(),
     skippedLines: z.array(z.number()),
     reimportOf: z.string().nullable().optional(),
+    /** LAS: the well the curves went into (matched or created from the file). */
+    wellId: z.string().optional(),
   })
   .catchall(z.unknown());
 export type ImportOutcome = z.infer<typeof outcomeSchema>;

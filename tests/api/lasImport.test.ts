@@ -163,6 +163,7 @@ describe('LAS 2.0 import', () => {
     const list = (await team.agent.get(`${base}/wells?q=OSPREY-9`)).body;
     expect(list.total).toBe(1);
     expect(list.items[0]).toMatchObject({ name: 'OSPREY-9', uwi: '199999999999W599' });
+    expect(res.body.outcome.wellId).toBe(list.items[0].id);
     expect(list.items[0].lon).toBeCloseTo(-101.215, 9);
     expect(list.items[0].lat).toBeCloseTo(-32.61, 9);
     expect(await curveCount()).toBe(before + 4);

@@ -216,5 +216,5 @@ export async function writeLasCurves(tx: Tx, teamId: string, userId: string, upl
     });
     progress('writing log curves', ++done, las.curves.length);
   }
-  return { created: las.curves.length, wellCreated: !plan.well && !!nw };
+  return { created: las.curves.length, wellCreated: !plan.well && !!nw, wellId };
 }
