@@ -91,6 +91,18 @@ describe('well header CSV', () => {
     expect(await counts()).toEqual(before);
   });
 
+  it('lists every problem of a row at once: a bad latitude with a bad date and a bad status', async () => {
+    const csv = Buffer.from('name,lon,lat,spud_date,status\nALL-1,-101.2,-132.63,2019-13-45,maybe\n');
+    const res = await post('wells-all-problems.csv', 'wells', { dryRun: 'true' }, csv);
+    expect(res.status).toBe(200);
+    expect(res.body.problems).toEqual([
+      { line: 2, column: 'spud_date', message: "'2019-13-45' is not a date (write it as YYYY-MM-DD)" },
+      { line: 2, column: 'status', message: expect.stringContaining("'maybe' is not one of") },
+      { line: 2, column: 'lat', message: 'latitude -132.63 is outside −90..90' },
+    ]);
+    expect(res.body.counts).toMatchObject({ records: 1, invalid: 1, valid: 0 });
+  });
+
   it('counts a row with the wrong number of fields as a skipped record', async () => {
     const csv = Buffer.from('name,lon,lat\nR-1,-101.2,-32.4\nR-2,-101.3\nR-3,-101.4,-32.5\n');
     const res = await post('ragged.csv', 'wells', { dryRun: 'true' }, csv);

@@ -85,14 +85,20 @@ function resolveWell(r: MappedRecord, lookup: WellLookup, problems: Problem[], c
   return well;
 }
 
-export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEpsg: number): PlanResult<WellPlanRow[]> {
+/**
+ * `rejected` are the records the field mapping already refused (bad cells left null): they are checked
+ * too, so a row's coordinate problem is listed with its bad date rather than after it is fixed.
+ */
+export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEpsg: number, rejected: MappedRecord[] = []): PlanResult<WellPlanRow[]> {
   const problems: Problem[] = [];
   const invalid: number[] = [];
   const rows: WellPlanRow[] = [];
   const firstLineOf = new Map<string, number>();
-  for (const r of records) {
+  const refused = new Set(rejected);
+  for (const r of [...records, ...rejected].sort((a, b) => a.line - b.line)) {
     const v = r.values;
-    const name = String(v.name);
+    const isRejected = refused.has(r);
+    const name = v.name === null || v.name === undefined ? '' : String(v.name);
     const uwi = str(v.uwi);
     const lineProblems: Problem[] = [];
     for (const key of [name.toLowerCase(), uwi?.toLowerCase()]) {
@@ -104,7 +110,9 @@ export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEp
     const x = v.x as number;
     const y = v.y as number;
     let lonLat: { lon: number; lat: number } | null = null;
-    if (epsg === 4326) {
+    if (typeof x !== 'number' || typeof y !== 'number') {
+      // A coordinate that did not read is already reported by the mapping.
+    } else if (epsg === 4326) {
       const message = checkLonLat(x, y);
       if (message) lineProblems.push({ line: r.line, column: message.startsWith('latitude') ? 'y' : 'x', message });
       else lonLat = { lon: x, lat: y };
@@ -115,7 +123,7 @@ export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEp
         lineProblems.push({ line: r.line, column: 'x', message: (err as Error).message });
       }
     }
-    const byName = lookup.find(name);
+    const byName = name ? lookup.find(name) : undefined;
     const byUwi = uwi ? lookup.find(uwi) : undefined;
     if (byName && byUwi && byName.id !== byUwi.id) {
       lineProblems.push({ line: r.line, column: 'uwi', message: `UWI "${uwi}" belongs to well "${byUwi.name}", not "${name}"` });
@@ -126,7 +134,7 @@ export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEp
     const tdTvdM = num(v.tdTvd);
     if (tdMdM !== null && tdMdM <= 0) lineProblems.push({ line: r.line, column: 'tdMd', message: 'total depth must be above zero' });
     if (tdMdM !== null && tdTvdM !== null && tdTvdM > tdMdM + 0.01) lineProblems.push({ line: r.line, column: 'tdTvd', message: 'TVD cannot exceed MD' });
-    if (lineProblems.length || !lonLat) {
+    if (isRejected || lineProblems.length || !lonLat) {
       problems.push(...lineProblems);
       invalid.push(r.line);
       continue;

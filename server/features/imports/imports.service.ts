@@ -111,7 +111,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
     : new Map();
 
   if (kind === 'wells') {
-    const p = planWells(mapped.records, lookup, req.epsg);
+    const p = planWells(mapped.records, lookup, req.epsg, mapped.rejected);
     return {
       ...base,
       problems: [...problems, ...inFileTerms(p.problems)],
