@@ -282,6 +282,17 @@ describe('surveys and pressures', () => {
     expect(await counts()).toEqual(before);
   });
 
+  it('refuses stations out of MD order, naming the line, instead of re-sorting them', async () => {
+    const before = await counts();
+    const csv = Buffer.from('well,md (m),inc,azi\nTEST-1,0,0,0\nTEST-1,800,5,10\nTEST-1,600,4,10\nTEST-1,1000,6,10\n');
+    const res = await post('survey-unsorted.csv', 'surveys', {}, csv);
+    expect(res.status).toBe(422);
+    expect(res.body.error.details).toEqual([
+      { line: 4, column: 'md (m)', message: 'MD 600 m is shallower than MD 800 m at line 3 for well "TEST-1": stations must increase in MD' },
+    ]);
+    expect(await counts()).toEqual(before);
+  });
+
   it('reports progress for an import run as a job', async () => {
     const lines = ['well,md (m),inc,azi'];
     for (let i = 0; i <= 3000; i++) lines.push(`"TEST-3, sidetrack",${i * 1.5},${Math.min(45, i * 0.02)},120`);

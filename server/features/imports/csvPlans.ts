@@ -194,8 +194,17 @@ export function planSurveys(records: MappedRecord[], lookup: WellLookup): PlanRe
   }
   const plans: SurveyPlan[] = [];
   for (const [wellId, group] of byWell) {
-    group.items.sort((a, b) => a.st.mdM - b.st.mdM);
     let ok = true;
+    // A station listed shallower than the one before is most often a typo or two surveys merged:
+    // re-sorting would hide it, so it is a problem of its line, like the other survey problems.
+    for (let i = 1; i < group.items.length; i++) {
+      const [prev, cur] = [group.items[i - 1], group.items[i]];
+      if (cur.st.mdM < prev.st.mdM) {
+        problems.push({ line: cur.line, column: 'md', message: `MD ${cur.st.mdM} m is shallower than MD ${prev.st.mdM} m at line ${prev.line} for well "${group.wellName}": stations must increase in MD` });
+        ok = false;
+      }
+    }
+    group.items.sort((a, b) => a.st.mdM - b.st.mdM);
     for (let i = 1; i < group.items.length; i++) {
       if (group.items[i].st.mdM === group.items[i - 1].st.mdM) {
         problems.push({ line: group.items[i].line, column: 'md', message: `a second station at MD ${group.items[i].st.mdM} m for well "${group.wellName}" (also line ${group.items[i - 1].line})` });
