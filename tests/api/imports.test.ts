@@ -231,6 +231,23 @@ describe('surveys and pressures', () => {
     expect(await counts()).toEqual(before);
   });
 
+  it('warns, naming the line, of a pressure or a top below the well\'s TD, without blocking it', async () => {
+    // TEST-1 has TD 3500 m MD (wells-good.csv).
+    const csv = Buffer.from('well,kind,md (m),value,unit\nTEST-1,kick,1000,1.2,sg\nTEST-1,kick,9000,1.3,sg\n');
+    const res = await post('deep-pressure.csv', 'pressures', { dryRun: 'true' }, csv);
+    expect(res.status).toBe(200);
+    expect(res.body.problems).toEqual([]);
+    expect(res.body.counts.valid).toBe(2);
+    expect(res.body.warnings).toEqual([
+      { line: 3, column: 'md (m)', message: 'MD 9000.0 m is deeper than the TD of well "TEST-1" (3500.0 m MD): check the depth, its unit, or the well\'s TD' },
+    ]);
+    const tops = await post('deep-top.csv', 'tops', { dryRun: 'true' }, Buffer.from('well,name,md (m)\nTEST-1,Deep Sand,4000\nTEST-1,Shallow Sand,900\n'));
+    expect(tops.body.problems).toEqual([]);
+    expect(tops.body.warnings).toEqual([
+      { line: 2, column: 'md (m)', message: 'MD 4000.0 m is deeper than the TD of well "TEST-1" (3500.0 m MD): check the depth, its unit, or the well\'s TD' },
+    ]);
+  });
+
   it('re-imports a pressure file as an update without duplicating its observations', async () => {
     const before = await counts();
     const again = await post('pressures-mixed.csv', 'pressures');

@@ -72,6 +72,14 @@ export interface PlanResult<T> {
   problems: Problem[];
   /** Lines dropped by planning (on top of those the field mapping dropped). */
   invalidLines: number[];
+  /** Not blocking: the row imports, but the user should look at it. */
+  warnings?: Problem[];
+}
+
+/** A depth below the well's TD is usually a unit or well mix-up, yet may be real (TD not updated): warn, don't block. */
+function warnBelowTd(well: { name: string; tdMdM?: number | null }, mdM: number, line: number, warnings: Problem[]) {
+  if (well.tdMdM == null || !(mdM > well.tdMdM + 0.01)) return;
+  warnings.push({ line, column: 'md', message: `MD ${mdM.toFixed(1)} m is deeper than the TD of well "${well.name}" (${well.tdMdM.toFixed(1)} m MD): check the depth, its unit, or the well's TD` });
 }
 
 const str = (v: unknown) => (v === null || v === undefined ? null : String(v));
@@ -224,6 +232,7 @@ export function planSurveys(records: MappedRecord[], lookup: WellLookup): PlanRe
 /** TVD (given, or from the survey), and the value in Pa and as EMW. */
 export function planPressures(records: MappedRecord[], lookup: WellLookup, surveys: Map<string, StationInput[]>): PlanResult<PressurePlanRow[]> {
   const problems: Problem[] = [];
+  const warnings: Problem[] = [];
   const invalid: number[] = [];
   const rows: PressurePlanRow[] = [];
   const computed = new Map<string, ReturnType<typeof computeSurvey> | null>();
@@ -256,6 +265,7 @@ export function planPressures(records: MappedRecord[], lookup: WellLookup, surve
       invalid.push(r.line);
       continue;
     }
+    warnBelowTd(well, mdM, r.line, warnings);
     const { pressurePa, emwKgM3 } = pressureAndEmw(value, unit, tvdM);
     // Below 0.5 sg or above 3.0 sg EMW is not a subsurface pressure: almost always a wrong unit.
     if (emwKgM3 < 500 || emwKgM3 > 3000) {
@@ -285,11 +295,12 @@ export function planPressures(records: MappedRecord[], lookup: WellLookup, surve
       source: str(v.source),
     });
   }
-  return { rows, problems, invalidLines: invalid };
+  return { rows, problems, invalidLines: invalid, warnings };
 }
 
 export function planTops(records: MappedRecord[], lookup: WellLookup, surveys: Map<string, StationInput[]>): PlanResult<TopPlanRow[]> {
   const problems: Problem[] = [];
+  const warnings: Problem[] = [];
   const invalid: number[] = [];
   const rows: TopPlanRow[] = [];
   for (const r of records) {
@@ -300,6 +311,7 @@ export function planTops(records: MappedRecord[], lookup: WellLookup, surveys: M
       invalid.push(r.line);
       continue;
     }
+    warnBelowTd(well, mdM, r.line, warnings);
     const given = num(r.values.tvd);
     rows.push({
       line: r.line,
@@ -312,5 +324,5 @@ export function planTops(records: MappedRecord[], lookup: WellLookup, surveys: M
       lithology: str(r.values.lithology),
     });
   }
-  return { rows, problems, invalidLines: invalid };
+  return { rows, problems, invalidLines: invalid, warnings };
 }

@@ -137,6 +137,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
     const p = planPressures(mapped.records, lookup, surveys);
     return {
       ...base,
+      warnings: inFileTerms(p.warnings ?? []),
       problems: [...problems, ...inFileTerms(p.problems)],
       invalidLines: [...invalidLines, ...p.invalidLines],
       preview: p.rows.slice(0, PREVIEW_ROWS).map(({ wellId: _id, ...r }) => r),
@@ -147,6 +148,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
   const p = planTops(mapped.records, lookup, surveys);
   return {
     ...base,
+    warnings: inFileTerms(p.warnings ?? []),
     problems: [...problems, ...inFileTerms(p.problems)],
     invalidLines: [...invalidLines, ...p.invalidLines],
     preview: p.rows.slice(0, PREVIEW_ROWS).map(({ wellId: _id, ...r }) => r),
@@ -158,7 +160,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
 async function planLasFile(db: Db, req: ImportRequest, las: LasFile, lookup: WellLookup): Promise<Planned> {
   let chosen = null;
   if (req.wellId) {
-    const [w] = await db.select({ id: wells.id, name: wells.name, uwi: wells.uwi }).from(wells).where(and(eq(wells.teamId, req.teamId), eq(wells.id, req.wellId)));
+    const [w] = await db.select({ id: wells.id, name: wells.name, uwi: wells.uwi, tdMdM: wells.tdMdM }).from(wells).where(and(eq(wells.teamId, req.teamId), eq(wells.id, req.wellId)));
     if (!w) throw badRequest('validation_failed', 'The chosen well is not in this team.', [{ path: 'wellId', message: 'is not a well of this team' }]);
     chosen = w;
   }

@@ -8,6 +8,8 @@ export interface KnownWell {
   id: string;
   name: string;
   uwi: string | null;
+  /** Total depth (MD), m, when known: an observation below it is worth a warning. */
+  tdMdM?: number | null;
 }
 
 /** The team's wells by lower-cased name and UWI, so rows can name a well either way. */
@@ -22,7 +24,7 @@ export class WellLookup {
   }
 
   static async load(db: Db, teamId: string): Promise<WellLookup> {
-    return new WellLookup(await db.select({ id: wells.id, name: wells.name, uwi: wells.uwi }).from(wells).where(eq(wells.teamId, teamId)));
+    return new WellLookup(await db.select({ id: wells.id, name: wells.name, uwi: wells.uwi, tdMdM: wells.tdMdM }).from(wells).where(eq(wells.teamId, teamId)));
   }
 
   find(nameOrUwi: string): KnownWell | undefined {
