@@ -12,4 +12,5 @@ export * from './calibration';
 export * from './window';
 export * from './buildProfile';
 export * from './csv';
+export * from './describe';
 export * from './atDepth';

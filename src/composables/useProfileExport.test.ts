@@ -17,6 +17,15 @@ describe('figure export', () => {
     expect(text.startsWith('<?xml')).toBe(true);
     expect(text).toContain('verify with the responsible licensed engineer and local regulations');
   });
+  it('drops the scoped-style markers of the page', () => {
+    const svg = svgWith(PROFILE_CAUTION);
+    svg.setAttribute('data-v-1a2b3c4d', '');
+    svg.firstElementChild!.setAttribute('data-v-1a2b3c4d', '');
+    const text = svgText(svg);
+    expect(text).not.toContain('data-v-');
+    expect(text).toContain(PROFILE_CAUTION);
+  });
+
   it('refuses a figure without the caution', () => {
     expect(() => svgText(svgWith('just a plot'))).toThrow('The figure lost its caution line; not exported.');
   });

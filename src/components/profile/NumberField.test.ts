@@ -20,4 +20,13 @@ describe('typed numbers out of range', () => {
     expect(w.emitted('update:value')?.at(-1)).toEqual([0.1]);
     expect(w.get('[data-testid="exp-clamped"]').text()).toBe('−2 is below the lowest allowed, 0.1: set to 0.1.');
   });
+
+  it('drops the message when the person comes back to the field, even if the value stays the same', async () => {
+    const w = mount(NumberField, { props: { label: 'Log smoothing', value: 0, min: 0, max: 500, testid: 'sm' } });
+    await w.get('input').setValue('-5');
+    await w.get('input').trigger('blur');
+    expect(w.find('[data-testid="sm-clamped"]').exists()).toBe(true);
+    await w.get('input').trigger('focus');
+    expect(w.find('[data-testid="sm-clamped"]').exists()).toBe(false);
+  });
 });
