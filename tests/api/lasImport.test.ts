@@ -213,8 +213,16 @@ describe('LAS 2.0 import', () => {
     expect(bad.body.problems[1].message).toMatch(/are easting and northing swapped/);
   });
 
-  it('warns about a NULL value that the file does not use', async () => {
+  it('refuses a file whose data uses another null marker than its NULL, at the NULL line, with honest sample counts', async () => {
     const res = await post('wrong-null-sentinel.las', { dryRun: 'true', wellId });
-    expect(res.body.warnings.length).toBeGreaterThan(0);
+    expect(res.body.problems).toEqual([
+      { line: 8, column: 'NULL', message: "the file's NULL is -999.25 but its data uses -9999 for gaps (9 samples of GR, RHOB, first at line 25); correct NULL in ~W" },
+    ]);
+    const gr = res.body.preview.find((c: { mnemonic: string }) => c.mnemonic === 'GR');
+    expect(gr).toMatchObject({ samples: 12, validSamples: 6 });
+    const before = await curveCount();
+    const commit = await post('wrong-null-sentinel.las', { wellId });
+    expect(commit.status).toBe(422);
+    expect(await curveCount()).toBe(before);
   });
 });

@@ -7,37 +7,44 @@ const MIN_EDGE_RUN = 3;
 const LARGE = 999;
 
 interface Suspect {
+  /** A listed marker seen twice or more, rather than a run at an edge of the curve. */
+  known: boolean;
   count: number;
   columns: string[];
   firstLine: number;
 }
 
 /**
- * Warns when a value other than the declared NULL recurs like a null marker: a common marker that occurs
- * at least twice, or a large negative value repeated at the start or end of a curve. The values are not changed.
+ * Checks for a value other than the declared NULL that recurs like a null marker. A known negative
+ * marker (−999.25, −9999, …) seen at least twice is no measurement of any log curve, so the file's NULL
+ * is wrong: that is an error at the NULL item, and those samples become NaN gaps so counts of valid
+ * samples stay honest. Other suspects (a positive marker, or a large negative run at the start or end
+ * of a curve) may be real readings and only warn. Returns the values turned into gaps.
  *
  * @example
- * warnOfNullSentinels([gr], ['GR'], lineOfRow, rowCount, -999.25, 14, warnings);
- * // → warning "value -9999 occurs 6 times (GR) like a null marker, but NULL is -999.25 …"
+ * checkNullSentinels([gr], ['GR'], lineOfRow, rowCount, -999.25, 8, errors, warnings);
+ * // → Set {-9999}; error on line 8 "the file's NULL is -999.25 but its data uses -9999 for gaps …"
  */
-export function warnOfNullSentinels(
+export function checkNullSentinels(
   columns: Float64Array[],
   mnemonics: string[],
   lineOfRow: Int32Array,
   rowCount: number,
   nullValue: number,
   nullLine: number,
+  errors: ProblemList,
   warnings: ProblemList,
-): void {
+): Set<number> {
   const markers = new Set(COMMON_NULL_MARKERS.filter((v) => v !== nullValue));
   const suspects = new Map<number, Suspect>();
-  const note = (value: number, count: number, column: string, line: number) => {
+  const note = (value: number, count: number, column: string, line: number, known: boolean) => {
     const s = suspects.get(value);
     if (!s) {
-      suspects.set(value, { count, columns: [column], firstLine: line });
+      suspects.set(value, { count, columns: [column], firstLine: line, known });
       return;
     }
     s.count += count;
+    s.known ||= known;
     if (!s.columns.includes(column)) s.columns.push(column);
     s.firstLine = Math.min(s.firstLine, line);
   };
@@ -54,14 +61,24 @@ export function warnOfNullSentinels(
         } else counts.set(v, { count: 1, firstLine: lineOfRow[i] });
       }
     }
-    for (const [v, c] of counts) if (c.count >= 2) note(v, c.count, mnemonics[k], c.firstLine);
+    for (const [v, c] of counts) if (c.count >= 2) note(v, c.count, mnemonics[k], c.firstLine, true);
     for (const run of edgeRuns(values, rowCount, markers)) {
       if (counts.has(run.value) || run.value === nullValue) continue;
-      note(run.value, run.length, mnemonics[k], lineOfRow[run.start]);
+      note(run.value, run.length, mnemonics[k], lineOfRow[run.start], false);
     }
   });
 
+  const gaps = new Set<number>();
   for (const [value, s] of suspects) {
+    if (s.known && value < 0) {
+      gaps.add(value);
+      errors.add(
+        nullLine > 0 ? nullLine : s.firstLine,
+        `the file's NULL is ${nullValue} but its data uses ${value} for gaps (${s.count} samples of ${s.columns.join(', ')}, first at line ${s.firstLine}); correct NULL in ~W`,
+        'NULL',
+      );
+      continue;
+    }
     warnings.add(
       s.firstLine,
       `value ${value} occurs ${s.count} times (${s.columns.join(', ')}) like a null marker, but NULL is ${nullValue}` +
@@ -69,6 +86,10 @@ export function warnOfNullSentinels(
       s.columns[0],
     );
   }
+  if (gaps.size) {
+    for (const values of columns) for (let i = 0; i < rowCount; i++) if (gaps.has(values[i])) values[i] = NaN;
+  }
+  return gaps;
 }
 
 function edgeRuns(values: Float64Array, n: number, markers: Set<number>): { value: number; start: number; length: number }[] {

@@ -2,7 +2,7 @@ import { BINARY_FILE_MESSAGE, decodeText } from '../decodeText';
 import { type Problem, ProblemList } from '../problem';
 import { orderIndex } from './checkIndex';
 import { depthsInMetres, normaliseDepthUnit } from './depthUnit';
-import { warnOfNullSentinels } from './findNullSentinel';
+import { checkNullSentinels } from './findNullSentinel';
 import { findItem, readItems, readOther, renameDuplicates } from './headerSections';
 import { type RawSection, findSections, splitLines } from './lasLines';
 import { readData } from './readData';
@@ -93,7 +93,7 @@ export function parseLas(input: string | Uint8Array): LasFile {
       { mnemonic: indexItem.mnemonic, errors, warnings, notes },
     );
     const nullLine = findItem(wellItems, 'NULL')?.line ?? 0;
-    warnOfNullSentinels(data.columns.slice(1), mnemonics.slice(1), data.lineOfRow, data.rowCount, well.NULL, nullLine, warnings);
+    checkNullSentinels(data.columns.slice(1), mnemonics.slice(1), data.lineOfRow, data.rowCount, well.NULL, nullLine, errors, warnings);
   }
 
   const n = data.rowCount;

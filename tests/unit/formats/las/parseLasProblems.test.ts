@@ -82,15 +82,27 @@ describe('parseLas reports problems with their line', () => {
     expect(result.warnings).toEqual([{ line: 35, message: 'STEP is 0.5 but the index steps by 1.25 from line 34 to this line' }]);
   });
 
-  it('a value recurring like a null marker that is not the declared NULL', () => {
+  it('a null marker the data uses that is not the declared NULL blocks, at the NULL line, and its samples are gaps', () => {
     const result = las('wrong-null-sentinel.las');
-    expect(result.errors).toEqual([]);
-    expect(result.warnings).toEqual([
+    expect(result.errors).toEqual([
       {
-        line: 25,
-        column: 'GR',
-        message: 'value -9999 occurs 9 times (GR, RHOB) like a null marker, but NULL is -999.25 (line 8); check NULL in ~W',
+        line: 8,
+        column: 'NULL',
+        message: "the file's NULL is -999.25 but its data uses -9999 for gaps (9 samples of GR, RHOB, first at line 25); correct NULL in ~W",
       },
+    ]);
+    expect(result.warnings).toEqual([]);
+    // 12 samples, 6 of GR and 3 of RHOB are -9999: those count as gaps, not as readings.
+    const valid = (m: string) => result.curves.find((c) => c.mnemonic === m)!.values.filter((v) => !Number.isNaN(v)).length;
+    expect([valid('GR'), valid('RHOB'), valid('DT')]).toEqual([6, 9, 12]);
+  });
+
+  it('a large negative run at the edge of a curve that is no known marker only warns', () => {
+    const text = fixtureText('las', 'wrong-null-sentinel.las').replaceAll('-9999 ', '-1234 ');
+    const result = parseLas(text);
+    expect(result.errors).toEqual([]);
+    expect(result.warnings.map((w) => w.message)).toEqual([
+      'value -1234 occurs 9 times (GR, RHOB) like a null marker, but NULL is -999.25 (line 8); check NULL in ~W',
     ]);
   });
 
