@@ -52,7 +52,8 @@ describe('reference layers', () => {
     const before = (await team.agent.get(`${base}/layers`)).body.length;
     const notJson = await upload('x.geojson', Buffer.from('{"type": "FeatureCollection", '));
     expect(notJson.status).toBe(400);
-    expect(notJson.body.error.message).toMatch(/^x.geojson is not valid JSON/);
+    // The parser's offset becomes a line and column an editor can jump to.
+    expect(notJson.body.error.message).toMatch(/^x\.geojson is not valid JSON at line 1, column 3\d: /);
     const notFc = await upload('x.geojson', Buffer.from('{"type":"Feature"}'));
     expect(notFc.body.error.message).toMatch(/is not a GeoJSON FeatureCollection/);
     const outside = await upload('x.geojson', fc([block(-101, -32.6, 'ok'), block(200, 10, 'bad')]));
@@ -60,7 +61,8 @@ describe('reference layers', () => {
     const bow = { type: 'Feature', properties: {}, geometry: { type: 'Polygon', coordinates: [[[-101, -32.5], [-100.9, -32.4], [-100.9, -32.5], [-101, -32.4], [-101, -32.5]]] } };
     const invalid = await upload('x.geojson', fc([block(-101, -32.6, 'ok'), bow]));
     expect(invalid.status).toBe(400);
-    expect(invalid.body.error.message).toMatch(/^Feature 2 is not a valid geometry: Self-intersection/);
+    // The two diagonals of the bow-tie cross at (−100.95, −32.45).
+    expect(invalid.body.error.message).toBe('Feature 2 is not a valid geometry: its outline crosses itself near lon -100.95, lat -32.45.');
     const badColour = await upload('x.geojson', fc([block(-101, -32.6, 'ok')]), { name: 'c', color: 'red' });
     expect(badColour.body.error.details[0]).toEqual({ path: 'color', message: 'must be a colour like #3a7bd5' });
     expect((await team.agent.get(`${base}/layers`)).body.length).toBe(before);

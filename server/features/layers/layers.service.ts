@@ -5,6 +5,7 @@ import { referenceLayers } from '../../db/schema';
 import { bulkInsert } from '../../lib/bulkInsert';
 import { badRequest, notFound } from '../../lib/httpError';
 import { readLayerFile } from './readLayerFile';
+import { invalidGeometryMessage } from './layerMessages';
 
 export interface NewLayer {
   teamId: string;
@@ -36,7 +37,8 @@ export async function createLayer(db: Db, layer: NewLayer): Promise<ReferenceLay
       WHERE NOT ST_IsValid(geom) ORDER BY n LIMIT 1`);
     if (bad.rows.length) {
       // Throwing rolls the whole layer back: nothing is stored.
-      throw badRequest('invalid_layer', `Feature ${bad.rows[0].n} is not a valid geometry: ${bad.rows[0].reason}.`, { feature: Number(bad.rows[0].n) });
+      const n = Number(bad.rows[0].n);
+      throw badRequest('invalid_layer', invalidGeometryMessage(n, features[n - 1]?.properties, bad.rows[0].reason), { feature: n });
     }
     return row.id;
   });

@@ -2,6 +2,7 @@ import { kml } from '@tmcw/togeojson';
 import { DOMParser } from '@xmldom/xmldom';
 import { z } from 'zod';
 import { badRequest } from '../../lib/httpError';
+import { jsonErrorAt } from './layerMessages';
 
 export const MAX_LAYER_BYTES = 20 * 1024 * 1024;
 export const MAX_LAYER_FEATURES = 50_000;
@@ -46,7 +47,7 @@ export function readLayerFile(fileName: string, bytes: Buffer): LayerFeature[] {
     try {
       data = JSON.parse(text);
     } catch (err) {
-      throw badRequest('invalid_layer', `${fileName} is not valid JSON: ${(err as Error).message}.`);
+      throw badRequest('invalid_layer', `${fileName} is not valid JSON at ${jsonErrorAt(text, err as Error)}.`);
     }
   }
   const fc = featureCollection.safeParse(data);
