@@ -82,3 +82,38 @@ export const apiErrorSchema = z.object({
   }),
 });
 export type ApiError = z.infer<typeof apiErrorSchema>;
+
+/** An invitation still waiting for its person (not accepted, not expired), as team admins see it. */
+export const pendingInvitationSchema = z.object({
+  id: z.string().uuid(),
+  email: z.string(),
+  name: z.string(),
+  role: roleSchema,
+  /** Name of the admin who sent it; null when that account is gone. */
+  invitedBy: z.string().nullable(),
+  createdAt: z.string(),
+  expiresAt: z.string(),
+});
+export type PendingInvitation = z.infer<typeof pendingInvitationSchema>;
+
+/** What an invitation link says about itself when opened: no more than the invitation mail did. */
+export const invitationCheckSchema = z.object({
+  email: z.string(),
+  teamName: z.string(),
+  /** The address has an account already: its owner confirms with the current password. */
+  existingAccount: z.boolean(),
+});
+export type InvitationCheck = z.infer<typeof invitationCheckSchema>;
+
+/** A reset link that can still be used, when opened. */
+export const resetCheckSchema = z.object({ expiresAt: z.string() });
+export type ResetCheck = z.infer<typeof resetCheckSchema>;
+
+/** Harmless facts the sign-in pages need before anyone signs in. */
+export const authOptionsSchema = z.object({
+  /** Mail goes to the local mail fake on this machine, not out (no SMTP_HOST of a real server). */
+  mailFake: z.boolean(),
+  resetLinkMinutes: z.number().int().positive(),
+  invitationDays: z.number().int().positive(),
+});
+export type AuthOptions = z.infer<typeof authOptionsSchema>;

@@ -1,12 +1,7 @@
 import type { Action, Role } from '@shared/auth/permissions';
 
-/** How roles read in the interface. */
-export const ROLE_LABELS: Record<Role, string> = {
-  admin: 'Admin',
-  geoscientist: 'Geoscientist',
-  planner: 'Well planner',
-  viewer: 'Viewer',
-};
+/** How roles read in the interface (shared with the server, which names roles in mail). */
+export { ROLE_LABELS } from '@shared/auth/roleLabels';
 
 /** One line per role for the invite form and the members table. */
 export const ROLE_DESCRIPTIONS: Record<Role, string> = {

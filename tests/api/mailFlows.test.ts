@@ -201,3 +201,102 @@ describe('expired links', () => {
     expect((await user.agent.get('/api/auth/me')).status).toBe(200);
   });
 });
+
+describe('opening a link checks it before any password is typed', () => {
+  it('an invitation link tells its address, team and which form to show; used, expired and made-up links get 410/404', async () => {
+    const email = `opener-${Date.now()}@porelith.example`;
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const since = new Date(Date.now() - 1000);
+    const inv = await admin.post(`/api/teams/${ctx.demoTeamId}/invitations`).send({ email, name: 'Opener', role: 'planner' });
+    const mail = await waitForMail(ctx.db, email, since);
+    // The mail names the role as the app does (src/navigation/labels.ts via shared/auth/roleLabels.ts).
+    expect(mail.textBody).toContain('on Porelith as Well planner.');
+    const token = linkToken(mail.textBody, '/accept-invite');
+
+    const open = await supertest(ctx.app).get(`/api/auth/invitations/${token}`);
+    expect(open.status).toBe(200);
+    expect(open.body).toEqual({ email, teamName: 'Synthetic demo', existingAccount: false });
+
+    const madeUp = await supertest(ctx.app).get(`/api/auth/invitations/${'x'.repeat(43)}`);
+    expect(madeUp.status).toBe(404);
+    expect(madeUp.body.error).toMatchObject({ code: 'invalid_token', details: { reason: 'unknown' } });
+    expect(madeUp.body.error.message).toMatch(/not valid/);
+    expect((await supertest(ctx.app).get('/api/auth/invitations/abc')).status).toBe(404);
+
+    await supertest(ctx.app).post('/api/auth/accept-invite').send({ token, password: 'opener-password-1' }).expect(200);
+    const used = await supertest(ctx.app).get(`/api/auth/invitations/${token}`);
+    expect(used.status).toBe(410);
+    expect(used.body.error).toMatchObject({ code: 'invalid_token', message: 'This invitation link was used already; each link works once.' });
+    expect(JSON.stringify(used.body)).not.toContain(email);
+
+    await ctx.db.update(invitations).set({ acceptedAt: null, expiresAt: new Date(Date.now() - 60_000) }).where(eq(invitations.id, inv.body.id));
+    const expired = await supertest(ctx.app).get(`/api/auth/invitations/${token}`);
+    expect(expired.status).toBe(410);
+    expect(expired.body.error.message).toBe('This invitation link has expired (links last 7 days); ask your team admin to invite you again.');
+  });
+
+  it('says existingAccount for an address that has an account', async () => {
+    const inviter = await freshTeamAgent(ctx, 'Check existing team', 'admin');
+    const member = await freshTeamAgent(ctx, 'Check home team', 'viewer');
+    const since = new Date(Date.now() - 1000);
+    await inviter.agent.post(`/api/teams/${inviter.teamId}/invitations`).send({ email: member.email, name: 'M', role: 'viewer' }).expect(201);
+    const token = linkToken((await waitForMail(ctx.db, member.email, since)).textBody, '/accept-invite');
+    const open = await supertest(ctx.app).get(`/api/auth/invitations/${token}`);
+    expect(open.body).toEqual({ email: member.email, teamName: expect.stringContaining('Check existing team'), existingAccount: true });
+  });
+
+  it('a reset link answers with its expiry only; once used it is 410, a made-up one 404, and checking writes nothing', async () => {
+    const user = await freshTeamAgent(ctx, 'Reset check team', 'viewer');
+    const since = new Date(Date.now() - 1000);
+    await supertest(ctx.app).post('/api/auth/reset-request').send({ email: user.email }).expect(202);
+    const mail = await waitForMail(ctx.db, user.email, since);
+    expect(mail.teamId).toBeNull(); // personal: never in any team's Outbox
+    const token = linkToken(mail.textBody, '/reset-password');
+
+    const open = await supertest(ctx.app).get(`/api/auth/resets/${token}`);
+    expect(open.status).toBe(200);
+    expect(Object.keys(open.body)).toEqual(['expiresAt']);
+    // RESET_MINUTES = 60 in auth.service.ts
+    const minutesLeft = (Date.parse(open.body.expiresAt) - Date.now()) / 60_000;
+    expect(minutesLeft).toBeGreaterThan(55);
+    expect(minutesLeft).toBeLessThanOrEqual(60);
+    const [link] = await ctx.db.select().from(passwordResets).where(eq(passwordResets.userId, user.userId));
+    expect(link.usedAt).toBeNull();
+
+    expect((await supertest(ctx.app).get(`/api/auth/resets/${'y'.repeat(43)}`)).status).toBe(404);
+    await supertest(ctx.app).post('/api/auth/reset').send({ token, password: 'checked-password-2' }).expect(200);
+    const used = await supertest(ctx.app).get(`/api/auth/resets/${token}`);
+    expect(used.status).toBe(410);
+    expect(used.body.error.message).toBe('This password-reset link was used already; each link works once.');
+  });
+});
+
+describe('mail for whoever runs Porelith', () => {
+  it('the options say the local mail fake is in use, with the real link lifetimes', async () => {
+    const res = await supertest(ctx.app).get('/api/auth/options');
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ mailFake: true, resetLinkMinutes: 60, invitationDays: 7 });
+  });
+
+  it('says mailFake false when a real SMTP host is configured', async () => {
+    const { isLocalMailFake } = await import('../../server/features/mail/mailer');
+    expect(isLocalMailFake({ SMTP_HOST: 'smtp.example.org', SMTP_USER: undefined })).toBe(false);
+    expect(isLocalMailFake({ SMTP_HOST: '127.0.0.1', SMTP_USER: 'relay' })).toBe(false);
+    expect(isLocalMailFake({ SMTP_HOST: 'localhost', SMTP_USER: undefined })).toBe(true);
+  });
+
+  it('mail:last finds the newest message stored for an address (the reset link), and nothing for others', async () => {
+    const { newestMailTo, formatMail } = await import('../../server/features/mail/lastMail');
+    const user = await freshTeamAgent(ctx, 'Mail last team', 'viewer');
+    const since = new Date(Date.now() - 1000);
+    await supertest(ctx.app).post('/api/auth/reset-request').send({ email: user.email }).expect(202);
+    await waitForMail(ctx.db, user.email, since);
+    await new Promise((r) => setTimeout(r, 20));
+    await supertest(ctx.app).post('/api/auth/reset-request').send({ email: user.email }).expect(202);
+    const second = await waitForMail(ctx.db, user.email, new Date(Date.now() - 10));
+    const found = await newestMailTo(ctx.db, user.email.toUpperCase());
+    expect(found?.text).toBe(second.textBody);
+    expect(formatMail(found!)).toContain('Subject: Reset your Porelith password');
+    expect(await newestMailTo(ctx.db, 'never-mailed@porelith.example')).toBeNull();
+  });
+});

@@ -94,3 +94,91 @@ describe('an invitation whose mail cannot be sent', () => {
     expect(await ctx.db.select().from(invitations).where(eq(invitations.email, email))).toEqual([]);
   });
 });
+
+describe('pending invitations', () => {
+  async function invite(agent: Awaited<ReturnType<typeof signedInAgent>>, teamId: string, role = 'viewer') {
+    const { waitForMail, linkToken } = await import('./support/testApp');
+    const email = `pending-${Date.now()}-${Math.random().toString(36).slice(2, 6)}@porelith.example`;
+    const since = new Date(Date.now() - 1000);
+    const res = await agent.post(`/api/teams/${teamId}/invitations`).send({ email, name: 'Pending Person', role });
+    expect(res.status).toBe(201);
+    const mail = await waitForMail(ctx.db, email, since);
+    return { id: res.body.id as string, email, token: linkToken(mail.textBody, '/accept-invite') };
+  }
+
+  it('lists unused, unexpired invitations with e-mail, role, inviter and expiry (admins only: 403 for others)', async () => {
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const inv = await invite(admin, ctx.demoTeamId, 'planner');
+    const list = await admin.get(`/api/teams/${ctx.demoTeamId}/invitations`);
+    expect(list.status).toBe(200);
+    const row = list.body.find((i: { id: string }) => i.id === inv.id);
+    expect(row).toMatchObject({ email: inv.email, role: 'planner', name: 'Pending Person' });
+    expect(typeof row.invitedBy).toBe('string');
+    expect(Date.parse(row.expiresAt)).toBeGreaterThan(Date.now() + 6 * 86_400_000);
+    expect(JSON.stringify(list.body)).not.toMatch(/token/i);
+
+    const { invitations } = await import('../../server/db/schema');
+    const { eq } = await import('drizzle-orm');
+    const used = await invite(admin, ctx.demoTeamId);
+    await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: used.token, password: 'pending-password-1' }).expect(200);
+    const expired = await invite(admin, ctx.demoTeamId);
+    await ctx.db.update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.id, expired.id));
+    const ids = (await admin.get(`/api/teams/${ctx.demoTeamId}/invitations`)).body.map((i: { id: string }) => i.id);
+    expect(ids).toContain(inv.id);
+    expect(ids).not.toContain(used.id);
+    expect(ids).not.toContain(expired.id);
+
+    for (const who of ['planner@porelith.example', 'viewer@porelith.example', 'geoscientist@porelith.example']) {
+      const agent = await signedInAgent(ctx, who);
+      const get = await agent.get(`/api/teams/${ctx.demoTeamId}/invitations`);
+      expect(get.status).toBe(403);
+      expect(get.body).toEqual({ error: { code: 'forbidden', message: 'You do not have access to this.' } });
+      expect((await agent.delete(`/api/teams/${ctx.demoTeamId}/invitations/${inv.id}`)).status).toBe(403);
+      expect((await agent.post(`/api/teams/${ctx.demoTeamId}/invitations/${inv.id}/resend`)).status).toBe(403);
+    }
+    // An admin of another team cannot touch this team's invitation through their own team either.
+    const other = await signedInAgent(ctx, 'other-admin@porelith.example', 'other-password-1');
+    expect((await other.delete(`/api/teams/${otherTeamId}/invitations/${inv.id}`)).status).toBe(404);
+    expect((await admin.get(`/api/teams/${ctx.demoTeamId}/invitations`)).body.map((i: { id: string }) => i.id)).toContain(inv.id);
+  });
+
+  it('revoking removes it from the list and its link is refused (404 on opening, 400 on use), nothing written', async () => {
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const inv = await invite(admin, ctx.demoTeamId);
+    const del = await admin.delete(`/api/teams/${ctx.demoTeamId}/invitations/${inv.id}`);
+    expect(del.status).toBe(204);
+    expect((await admin.get(`/api/teams/${ctx.demoTeamId}/invitations`)).body.map((i: { id: string }) => i.id)).not.toContain(inv.id);
+    expect((await supertest(ctx.app).get(`/api/auth/invitations/${inv.token}`)).status).toBe(404);
+    const accept = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: inv.token, password: 'revoked-password-1' });
+    expect(accept.status).toBe(400);
+    expect(accept.body.error.code).toBe('invalid_token');
+    const { eq } = await import('drizzle-orm');
+    expect(await ctx.db.select().from(users).where(eq(users.email, inv.email))).toEqual([]);
+    expect((await admin.delete(`/api/teams/${ctx.demoTeamId}/invitations/${inv.id}`)).status).toBe(404);
+  });
+
+  it('resending mails a new link with a fresh expiry; the old link no longer works, the new one does', async () => {
+    const { waitForMail, linkToken } = await import('./support/testApp');
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const inv = await invite(admin, ctx.demoTeamId, 'geoscientist');
+    const since = new Date();
+    const res = await admin.post(`/api/teams/${ctx.demoTeamId}/invitations/${inv.id}/resend`);
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ id: inv.id, email: inv.email, role: 'geoscientist' });
+    const mail = await waitForMail(ctx.db, inv.email, since);
+    const fresh = linkToken(mail.textBody, '/accept-invite');
+    expect(fresh).not.toBe(inv.token);
+    expect((await supertest(ctx.app).get(`/api/auth/invitations/${inv.token}`)).status).toBe(404);
+    expect((await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: inv.token, password: 'resent-password-1' })).status).toBe(400);
+    const ok = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: fresh, password: 'resent-password-1' });
+    expect(ok.status).toBe(200);
+    expect(ok.body.memberships).toEqual([{ teamId: ctx.demoTeamId, teamName: 'Synthetic demo', role: 'geoscientist' }]);
+  });
+
+  it('refuses a malformed invitation id by name', async () => {
+    const admin = await signedInAgent(ctx, 'admin@porelith.example');
+    const res = await admin.delete(`/api/teams/${ctx.demoTeamId}/invitations/nope`);
+    expect(res.status).toBe(400);
+    expect(res.body.error.details).toEqual([{ path: 'invitationId', message: 'must be an invitation id' }]);
+  });
+});

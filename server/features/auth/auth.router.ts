@@ -1,13 +1,28 @@
 import { Router, type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import { acceptTokenBody, resetRequestBody, signInBody } from '../../../shared/schemas/auth';
+import { z } from 'zod';
+import { acceptTokenBody, resetRequestBody, signInBody, type AuthOptions } from '../../../shared/schemas/auth';
 import type { Db } from '../../db/client';
 import type { Env } from '../../env';
 import { unauthenticated } from '../../lib/httpError';
 import { parse } from '../../lib/parse';
 import { endRequestSession, issueSessionCookie } from '../../middleware/session';
-import type { Mailer } from '../mail/mailer';
-import { acceptInvitation, loadSession, requestPasswordReset, resetPassword, signIn, startSession } from './auth.service';
+import { isLocalMailFake, type Mailer } from '../mail/mailer';
+import { INVITE_DAYS } from '../teams/teams.service';
+import {
+  acceptInvitation,
+  inspectInvitation,
+  inspectResetToken,
+  loadSession,
+  requestPasswordReset,
+  resetPassword,
+  RESET_MINUTES,
+  signIn,
+  startSession,
+} from './auth.service';
+
+// Any length up to the cap: a short made-up token is simply not found (404), like any other.
+const tokenParams = z.object({ token: z.string().min(1).max(200, 'is not a valid link token') });
 
 interface LimitOptions {
   /** What the message calls the attempts. */
@@ -51,6 +66,19 @@ export function authRouter(db: Db, env: Env, mailer: Mailer): Router {
   const signInLimit = limiter(env, { what: 'failed sign-in', perAccount: true, skipSuccessful: true });
   const signInSpray = limiter(env, { what: 'failed sign-in', perAccount: false, skipSuccessful: true, factor: 5 });
   const linkLimit = limiter(env, { what: 'password-reset', perAccount: false });
+  // Opening a link is looser than using one: the page checks it once on load, and tokens are 256-bit random.
+  const linkCheckLimit = limiter(env, { what: 'link check', perAccount: false, factor: 5 });
+  const options: AuthOptions = { mailFake: isLocalMailFake(env), resetLinkMinutes: RESET_MINUTES, invitationDays: INVITE_DAYS };
+
+  r.get('/options', (_req, res) => {
+    res.json(options);
+  });
+  r.get('/invitations/:token', linkCheckLimit, async (req, res) => {
+    res.json(await inspectInvitation(db, parse(tokenParams, req.params).token));
+  });
+  r.get('/resets/:token', linkCheckLimit, async (req, res) => {
+    res.json(await inspectResetToken(db, parse(tokenParams, req.params).token));
+  });
 
   r.post('/sign-in', signInSpray, signInLimit, async (req, res) => {
     const { email, password } = parse(signInBody, req.body);

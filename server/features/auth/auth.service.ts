@@ -1,7 +1,7 @@
 import bcrypt from 'bcryptjs';
 import { randomUUID } from 'node:crypto';
 import { and, eq, gt, isNull, lt, sql } from 'drizzle-orm';
-import type { Session } from '../../../shared/schemas/auth';
+import type { InvitationCheck, ResetCheck, Session } from '../../../shared/schemas/auth';
 import type { Db } from '../../db/client';
 import { invitations, memberships, passwordResets, revokedSessions, teams, users } from '../../db/schema';
 import { HttpError, badRequest, conflict } from '../../lib/httpError';
@@ -10,7 +10,8 @@ import { INVITE_DAYS } from '../teams/teams.service';
 import { hashLinkToken, newLinkToken } from './linkTokens';
 import type { SessionClaims, SessionGrant } from './sessionToken';
 
-const RESET_MINUTES = 60;
+/** How long a password-reset link works; the reset page says so. */
+export const RESET_MINUTES = 60;
 export const BCRYPT_ROUNDS = 10;
 // Compared against when the user is unknown, so timing does not reveal which e-mails exist.
 const DUMMY_HASH = bcrypt.hashSync('porelith-no-such-user', BCRYPT_ROUNDS);
@@ -180,4 +181,46 @@ export async function acceptInvitation(db: Db, token: string, password: string):
       .onConflictDoUpdate({ target: [memberships.teamId, memberships.userId], set: { role: inv.role } });
     return userId;
   });
+}
+
+// Opening a link: 404 when it never existed (or was revoked), 410 when it was used or has expired.
+const unknownLink = (what: string) =>
+  new HttpError(404, 'invalid_token', `This ${what} link is not valid: it may be mistyped, or it was withdrawn or replaced by a newer one.`, {
+    reason: 'unknown',
+  });
+const usedLink = (what: string) => new HttpError(410, 'invalid_token', `This ${what} link was used already; each link works once.`, { reason: 'used' });
+
+/**
+ * What an invitation link says when opened, before any password is typed; nothing is written.
+ * Returns no more than the invitation mail itself did (address and team), plus which form to show.
+ */
+export async function inspectInvitation(db: Db, token: string): Promise<InvitationCheck> {
+  const [inv] = await db
+    .select({ email: invitations.email, teamName: teams.name, acceptedAt: invitations.acceptedAt, expiresAt: invitations.expiresAt })
+    .from(invitations)
+    .innerJoin(teams, eq(teams.id, invitations.teamId))
+    .where(eq(invitations.tokenHash, hashLinkToken(token)));
+  if (!inv) throw unknownLink('invitation');
+  if (inv.acceptedAt) throw usedLink('invitation');
+  if (inv.expiresAt.getTime() <= Date.now()) {
+    const e = expiredInvitation();
+    throw new HttpError(410, e.code, e.message, e.details);
+  }
+  const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, inv.email));
+  return { email: inv.email, teamName: inv.teamName, existingAccount: Boolean(existing) };
+}
+
+/** Whether a reset link can still be used, when opened; reveals nothing about the account. */
+export async function inspectResetToken(db: Db, token: string): Promise<ResetCheck> {
+  const [reset] = await db
+    .select({ usedAt: passwordResets.usedAt, expiresAt: passwordResets.expiresAt })
+    .from(passwordResets)
+    .where(eq(passwordResets.tokenHash, hashLinkToken(token)));
+  if (!reset) throw unknownLink('password-reset');
+  if (reset.usedAt) throw usedLink('password-reset');
+  if (reset.expiresAt.getTime() <= Date.now()) {
+    const e = expiredReset();
+    throw new HttpError(410, e.code, e.message, e.details);
+  }
+  return { expiresAt: reset.expiresAt.toISOString() };
 }

@@ -38,3 +38,14 @@ export function createMailer(env: Pick<Env, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_SE
     close: () => transport.close(),
   };
 }
+
+const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1', '[::1]']);
+
+/**
+ * Whether mail goes to the local mail fake (kept in this machine's database) rather than out: `npm start`
+ * runs the fake when SMTP_HOST is unset, which the parsed environment sees as a loopback host without login.
+ * @example isLocalMailFake({ SMTP_HOST: '127.0.0.1', SMTP_USER: undefined }) // true
+ */
+export function isLocalMailFake(env: Pick<Env, 'SMTP_HOST' | 'SMTP_USER'>): boolean {
+  return LOOPBACK.has(env.SMTP_HOST.trim().toLowerCase()) && !env.SMTP_USER;
+}
