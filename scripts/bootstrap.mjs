@@ -1,8 +1,9 @@
 #!/usr/bin/env node
 // Plain Node on purpose: this runs before `npm ci`, so it may use nothing but Node's own modules.
-// `npm start` → start, `npm run dev` → dev, `npm test` → test, `npm run seed:demo` → seed.
+// `npm start` → start, `npm run dev` → dev, `npm test` → test, `npm run seed:demo` → seed,
+// `npm run mail:last -- --to x@example.org` → mail (the newest message the local mail fake kept for x).
 import { spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { ensureNodeModules, ensureDebianPackages, ensureChromium } from './setup/install.mjs';
@@ -11,7 +12,7 @@ import { readOrCreateSecret } from './setup/secrets.mjs';
 import { run, say, fail, ROOT } from './setup/proc.mjs';
 
 const mode = process.argv[2] ?? 'start';
-if (!['start', 'dev', 'test', 'seed', 'bench', 'admin'].includes(mode)) fail(`Unknown mode "${mode}" (start, dev, test, seed, bench, admin).`);
+if (!['start', 'dev', 'test', 'seed', 'bench', 'admin', 'mail'].includes(mode)) fail(`Unknown mode "${mode}" (start, dev, test, seed, bench, admin, mail).`);
 
 const tsx = join(ROOT, 'node_modules', '.bin', 'tsx');
 
@@ -58,7 +59,9 @@ async function runApp() {
   if (!databaseUrl) {
     ensureDebianPackages({ postgres: true });
     const dir = join(dataDir, 'pg');
-    cleanups.push(() => stopCluster(cluster ?? { dir })); // also when interrupted while it starts
+    // Reading mail while `npm start` runs must not stop the cluster the app is using.
+    const alreadyRunning = mode === 'mail' && existsSync(join(dir, 'postmaster.pid'));
+    if (!alreadyRunning) cleanups.push(() => stopCluster(cluster ?? { dir })); // also when interrupted while it starts
     cluster = await startPrivateCluster({ dir, port: pgPort, throwaway: false });
     databaseUrl = cluster.databaseUrl;
   }
@@ -70,6 +73,11 @@ async function runApp() {
     NODE_ENV: process.env.NODE_ENV ?? (mode === 'dev' ? 'development' : 'production'),
     PORELITH_DEMO: demo,
   };
+  if (mode === 'mail') {
+    await run(tsx, ['server/features/mail/mailLast.cli.ts', ...process.argv.slice(3)], { env, label: 'mail' });
+    cleanUp();
+    return;
+  }
   const setupArgs = mode === 'seed' ? ['--demo', '--regenerate'] : [];
   await run(tsx, ['server/db/setup.ts', ...setupArgs], { env, label: 'database' });
   if (mode === 'admin') await run(tsx, ['server/db/createAdmin.ts', ...process.argv.slice(3)], { env, label: 'first admin' });
