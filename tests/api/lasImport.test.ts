@@ -155,6 +155,11 @@ describe('LAS 2.0 import', () => {
       column: 'WELL',
       message: 'no well "OSPREY-9" or UWI/API "199999999999W599" in this team: the import creates it at lon -101.21500, lat -32.61000 from LATI/LONG (lines 13, 14)',
     });
+    // No water depth in the file: onshore/offshore comes from the nearest team well (KESTREL-3 ST1,
+    // ~13 km away by the haversine formula), and the preview says so along with what the well lacks.
+    expect(preview.body.las.plan.createWell).toMatchObject({ tdMdM: 1502, waterDepthM: null, offshore: false });
+    expect(preview.body.notes[1].line).toBe(12);
+    expect(preview.body.notes[1].message).toMatch(/^the new well "OSPREY-9" has onshore assumed from the nearest team well "KESTREL-3 ST1", 1[34]\.\d km away; TD 1502\.0 m MD taken from the deepest depth of the file, no TD TVD; no spud date; status "drilled" — edit its header before interpreting it$/);
     expect((await team.agent.get(`${base}/wells?q=OSPREY-9`)).body.total).toBe(0);
 
     const res = await post('osprey.las', {}, Buffer.from(text));
@@ -172,6 +177,34 @@ describe('LAS 2.0 import', () => {
     expect(update.body.las.plan.matchedBy).toBe('uwi');
     expect(await curveCount()).toBe(before + 4);
     expect((await team.agent.get(`${base}/wells?q=OSPREY-9`)).body.total).toBe(1);
+  });
+
+  it('creates a well offshore with its water depth and TD when the file gives them, and says what it lacks', async () => {
+    const text = withWellItems(
+      unknownWell('TERN-4', '155555555555W555'),
+      ' LATI.DEG        -10.5                        : LATITUDE',
+      ' LONG.DEG        40.25                        : LONGITUDE',
+      ' WDEP.M          312.5                        : WATER DEPTH',
+    );
+    const preview = await post('tern.las', { dryRun: 'true' }, Buffer.from(text));
+    expect(preview.body.problems).toEqual([]);
+    expect(preview.body.las.plan.createWell).toMatchObject({ waterDepthM: 312.5, offshore: true, tdMdM: 1502, datumElevationM: null });
+    expect(preview.body.notes[1].message).toBe(
+      'the new well "TERN-4" has no rotary-table elevation (EKB, EDF or EPD/APD) in the file: the well is created with RT 0 m; offshore from WDEP (line 15); TD 1502.0 m MD taken from the deepest depth of the file, no TD TVD; no spud date; status "drilled" — edit its header before interpreting it',
+    );
+    const res = await post('tern.las', {}, Buffer.from(text));
+    expect(res.status).toBe(201);
+    const well = (await team.agent.get(`${base}/wells/${res.body.outcome.wellId}`)).body;
+    expect(well).toMatchObject({ offshore: true, waterDepthM: 312.5, tdMdM: 1502 });
+  });
+
+  it('assumes onshore for a new well with no water depth and no team well within 20 km, and says so', async () => {
+    const text = withWellItems(unknownWell('PLOVER-2', '166666666666W566'), ' LATI.DEG  5.5  : LATITUDE', ' LONG.DEG  10.25  : LONGITUDE', '~PARAMETER INFORMATION', ' EPD .M   12.0  : PERMANENT DATUM ELEVATION', ' APD .M   9.5  : ABOVE PERMANENT DATUM');
+    const preview = await post('plover.las', { dryRun: 'true' }, Buffer.from(text));
+    expect(preview.body.problems).toEqual([]);
+    // LAS 2.0: the log reference is APD above the permanent datum, which is EPD above sea level.
+    expect(preview.body.las.plan.createWell).toMatchObject({ offshore: false, datumElevationM: 21.5, datumKind: 'RT' });
+    expect(preview.body.notes[1].message).toContain('onshore assumed: no water depth in the file and no team well within 20 km');
   });
 
   it('says why an unreadable location cannot create the well, at both lines', async () => {

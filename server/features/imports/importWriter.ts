@@ -179,6 +179,10 @@ export async function writeLasCurves(tx: Tx, teamId: string, userId: string, upl
         surfaceEpsg: nw.surfaceEpsg,
         ...(nw.datumElevationM !== null && nw.datumKind ? { datumElevationM: nw.datumElevationM, datumKind: nw.datumKind } : {}),
         groundElevationM: nw.groundElevationM,
+        waterDepthM: nw.waterDepthM,
+        tdMdM: nw.tdMdM,
+        // settleOffshore has run in planning; false only guards a plan built without it.
+        offshore: nw.offshore ?? false,
         createdUploadId: uploadId,
         updatedUploadId: uploadId,
         createdBy: userId,

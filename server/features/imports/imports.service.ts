@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { and, desc, eq } from 'drizzle-orm';
+import { and, desc, eq, sql } from 'drizzle-orm';
 import { decodeText } from '../../../shared/formats/decodeText';
 import { parseCsv, suggestColumnMatches } from '../../../shared/formats/csv';
 import { parseLas, type LasFile } from '../../../shared/formats/las';
@@ -13,7 +13,7 @@ import { HttpError, badRequest, conflict, notFound } from '../../lib/httpError';
 import { planPressures, planSurveys, planTops, planWells } from './csvPlans';
 import type { Progress } from '../../lib/jobs';
 import { removeRowsOfUploads, writeLasCurves, writePressures, writeSurveys, writeTops, writeWells } from './importWriter';
-import { planLas, type LasPlan } from './lasPlan';
+import { NEIGHBOUR_RADIUS_M, newWellGapsNote, planLas, settleOffshore, type LasPlan } from './lasPlan';
 import { WellLookup, loadSurveys } from './wellLookup';
 
 export const MAX_FILE_BYTES = 50 * 1024 * 1024;
@@ -166,6 +166,10 @@ async function planLasFile(db: Db, req: ImportRequest, las: LasFile, lookup: Wel
   }
   const roles = Object.fromEntries(Object.entries(req.mapping ?? {}).filter((e): e is [string, string] => typeof e[1] === 'string'));
   const { plan: p, problems, notes } = planLas(las, lookup, chosen, roles, req.epsg);
+  if (p.createWell) {
+    settleOffshore(p.createWell, await nearestTeamWell(db, req.teamId, p.createWell.lon, p.createWell.lat));
+    notes.push(newWellGapsNote(las, p.createWell));
+  }
   return {
     problems,
     warnings: las.warnings,
@@ -178,6 +182,18 @@ async function planLasFile(db: Db, req: ImportRequest, las: LasFile, lookup: Wel
     las: { plan: p, version: las.version, wrap: las.wrap },
     write: (tx, uploadId, pr) => writeLasCurves(tx, req.teamId, req.userId, uploadId, las, p, pr),
   };
+}
+
+/** The team's nearest well within the neighbour radius (on the spheroid), for settings a LAS file does not give. */
+async function nearestTeamWell(db: Db, teamId: string, lon: number, lat: number) {
+  const here = sql`ST_SetSRID(ST_MakePoint(${lon}, ${lat}), 4326)::geography`;
+  const [row] = await db
+    .select({ name: wells.name, offshore: wells.offshore, distanceM: sql<number>`ST_Distance(${wells.location}::geography, ${here})` })
+    .from(wells)
+    .where(and(eq(wells.teamId, teamId), sql`ST_DWithin(${wells.location}::geography, ${here}, ${NEIGHBOUR_RADIUS_M})`))
+    .orderBy(sql`${wells.location}::geography <-> ${here}`)
+    .limit(1);
+  return row ? { ...row, distanceM: Number(row.distanceM) } : null;
 }
 
 /** The latest earlier upload of the same bytes, and the ids of every earlier upload of them. */

@@ -26,11 +26,21 @@ export interface LasNewWell {
   surfaceY: number;
   surfaceEpsg: number;
   datumElevationM: number | null;
-  datumKind: 'KB' | 'DF' | null;
+  datumKind: 'KB' | 'DF' | 'RT' | null;
   groundElevationM: number | null;
+  waterDepthM: number | null;
+  /** The deepest depth of the file (the last sample or STOP), m MD: the well is at least this deep. */
+  tdMdM: number | null;
+  /** Null until settled: from the file (a water depth item), else from the nearest team well (see settleOffshore). */
+  offshore: boolean | null;
+  /** Why `offshore` has its value, in words for the preview. */
+  offshoreFrom: string;
   /** Where the location came from, e.g. "LATI/LONG (lines 14, 15)". */
   locationFrom: string;
 }
+
+/** How far a team well may be for its onshore/offshore setting to stand for a new well's. Common practice, no source. */
+export const NEIGHBOUR_RADIUS_M = 20_000;
 
 export interface LasPlan {
   well: KnownWell | null;
@@ -99,11 +109,49 @@ function newWellFrom(las: LasFile, uwi: string, epsg: number): { well: LasNewWel
       datumElevationM: loc.datumElevation?.value ?? null,
       datumKind: loc.datumElevation?.kind ?? null,
       groundElevationM: loc.groundElevation?.value ?? null,
+      waterDepthM: loc.waterDepth?.value ?? null,
+      tdMdM: deepestMdM(las),
+      offshore: loc.waterDepth ? loc.waterDepth.value > 0 : null,
+      offshoreFrom: loc.waterDepth ? `${loc.waterDepth.mnemonic} (line ${loc.waterDepth.line})` : '',
       locationFrom: at.from,
     },
     problems,
     missing: null,
   };
+}
+
+/** The deepest finite depth of the index (in metres, whatever the file's unit), or null with no data. */
+function deepestMdM(las: LasFile): number | null {
+  let deepest = -Infinity;
+  for (const v of las.index.valuesM) if (Number.isFinite(v) && v > deepest) deepest = v;
+  return Number.isFinite(deepest) ? deepest : null;
+}
+
+/**
+ * Settles whether a new well is offshore when the file does not say (the wells table needs a yes or no):
+ * from the nearest team well within {@link NEIGHBOUR_RADIUS_M}, else onshore, saying which in `offshoreFrom`.
+ */
+export function settleOffshore(well: LasNewWell, nearest: { name: string; offshore: boolean; distanceM: number } | null): void {
+  if (well.offshore !== null) return;
+  if (nearest) {
+    well.offshore = nearest.offshore;
+    well.offshoreFrom = `assumed from the nearest team well "${nearest.name}", ${(nearest.distanceM / 1000).toFixed(1)} km away`;
+  } else {
+    well.offshore = false;
+    well.offshoreFrom = `assumed: no water depth in the file and no team well within ${NEIGHBOUR_RADIUS_M / 1000} km`;
+  }
+}
+
+/** The plain note of what a well created from a LAS file lacks and what was assumed, for the preview. */
+export function newWellGapsNote(las: LasFile, well: LasNewWell): Problem {
+  const lacks: string[] = [];
+  if (well.datumElevationM === null && well.waterDepthM === null) lacks.push('no rotary-table elevation or water depth in the file: the well is created with RT 0 m and no water depth');
+  else if (well.datumElevationM === null) lacks.push('no rotary-table elevation (EKB, EDF or EPD/APD) in the file: the well is created with RT 0 m');
+  else if (well.waterDepthM === null && well.offshore) lacks.push('no water depth in the file');
+  lacks.push(well.offshore ? `offshore ${well.offshoreFrom.startsWith('assumed') ? well.offshoreFrom : `from ${well.offshoreFrom}`}` : `onshore ${well.offshoreFrom.startsWith('assumed') ? well.offshoreFrom : `from ${well.offshoreFrom}`}`);
+  lacks.push(well.tdMdM === null ? 'no TD' : `TD ${well.tdMdM.toFixed(1)} m MD taken from the deepest depth of the file, no TD TVD`);
+  lacks.push('no spud date; status "drilled"');
+  return { line: headerLine(las, 'WELL'), column: 'WELL', message: `the new well "${well.name}" has ${lacks.join('; ')} — edit its header before interpreting it` };
 }
 
 /**

@@ -18,8 +18,13 @@ export interface LasWellLocation {
   y: LasCoordinate | null;
   /** GDAT (geodetic datum) as written; '' when none. */
   geodeticDatum: string;
-  /** Kelly bushing (EKB) or else drill floor (EDF) elevation above the permanent datum, m. */
-  datumElevation: (LasCoordinate & { kind: 'KB' | 'DF' }) | null;
+  /**
+   * Kelly bushing (EKB) or else drill floor (EDF) elevation, m; else, by the LAS 2.0 definitions, the
+   * permanent datum's elevation (EPD) plus the log reference's height above it (APD), kind 'RT'.
+   */
+  datumElevation: (LasCoordinate & { kind: 'KB' | 'DF' | 'RT' }) | null;
+  /** Water depth (WDEP, WD, or an item described as water depth), m; its presence says the well is offshore. */
+  waterDepth: LasCoordinate | null;
   /** Ground level (EGL) elevation, m. */
   groundElevation: LasCoordinate | null;
   /** Items that are present but unreadable, each with its line. */
@@ -89,6 +94,11 @@ export function readLasLocation(las: Pick<LasFile, 'well' | 'parameters'>): LasW
   const y = number(Y_NAMES, false);
   const kb = number(['EKB'], true);
   const df = kb ? null : number(['EDF'], true);
+  const epd = kb || df ? null : number(['EPD'], true);
+  const apd = epd ? number(['APD'], true) : null;
+  // Mnemonics vary by vendor (WDEP, WD, WATD; common practice, no source): the description settles it.
+  const wdItem = items.find((i) => (['WDEP', 'WD', 'WATD', 'WDEPTH'].includes(i.mnemonic.toUpperCase()) || /water\s*depth/i.test(i.description)) && valueOf(i) !== '');
+  const waterDepth = wdItem ? number([wdItem.mnemonic.toUpperCase()], true) : null;
   const groundElevation = number(['EGL'], true);
   const gdat = find(['GDAT']);
   return {
@@ -97,7 +107,8 @@ export function readLasLocation(las: Pick<LasFile, 'well' | 'parameters'>): LasW
     x,
     y,
     geodeticDatum: gdat ? valueOf(gdat) : '',
-    datumElevation: kb ? { ...kb, kind: 'KB' } : df ? { ...df, kind: 'DF' } : null,
+    datumElevation: kb ? { ...kb, kind: 'KB' } : df ? { ...df, kind: 'DF' } : epd ? { ...epd, value: epd.value + (apd?.value ?? 0), mnemonic: apd ? `${epd.mnemonic}+${apd.mnemonic}` : epd.mnemonic, kind: 'RT' } : null,
+    waterDepth,
     groundElevation,
     problems: problems.sort((a, b) => a.line - b.line),
   };
