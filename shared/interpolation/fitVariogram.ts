@@ -9,7 +9,6 @@ export interface FitVariogramOptions {
 
 const GRID_STEPS = 80;
 const GOLDEN_STEPS = 60;
-const REWEIGHT_STEPS = 30;
 
 interface Bins {
   h: Float64Array;
@@ -34,74 +33,56 @@ function validateBins(experimental: readonly VariogramLag[], minimum: number): B
   return bins;
 }
 
-/** Cressie (1985) criterion Σ N·(γ̂ − γ)²/γ². */
-function cressie(b: Bins, shape: Float64Array, nugget: number, sill: number): number {
+/**
+ * Weights N(h)/γ̂(h)² from the experimental semivariances (floored so an empty-variance bin stays finite).
+ * Cressie (1985) writes the weight with the model γ(h); with the model in the denominator the criterion favours
+ * models that overshoot the small short-lag semivariances (a model above γ̂ costs at most N per bin, one below it
+ * costs without bound), which on smooth surfaces gave ranges far past the data and kriging standard deviations
+ * several times the cross-validation errors. The experimental form is the usual one-step variant.
+ */
+function weightsOf(b: Bins, floor: number): Float64Array {
+  const w = new Float64Array(b.h.length);
+  for (let j = 0; j < w.length; j++) w[j] = b.pairs[j] / Math.max(b.gamma[j] * b.gamma[j], floor);
+  return w;
+}
+
+/** Weighted residual sum of squares Σ wⱼ·(γ̂ⱼ − γⱼ)². */
+function criterion(b: Bins, w: Float64Array, shape: Float64Array, nugget: number, sill: number): number {
   let s = 0;
   for (let j = 0; j < shape.length; j++) {
-    const m = nugget + sill * shape[j];
-    const r = b.gamma[j] - m;
-    if (m <= 0) {
-      if (r !== 0) return Infinity;
-      continue;
-    }
-    s += (b.pairs[j] * r * r) / (m * m);
+    const r = b.gamma[j] - (nugget + sill * shape[j]);
+    s += w[j] * r * r;
   }
   return s;
 }
 
-/**
- * For a fixed range the model is linear in (nugget, sill): solve it by weighted least squares, re-weighting
- * with N/γ_model² until the weights settle (iteratively re-weighted form of Cressie 1985).
- */
-function fitLinear(b: Bins, shape: Float64Array, fixedNugget: number | undefined, floor: number): { nugget: number; sill: number } {
+/** For a fixed range the model is linear in (nugget, sill): solve the weighted least squares exactly, with nugget, sill ≥ 0. */
+function fitLinear(b: Bins, w: Float64Array, shape: Float64Array, fixedNugget: number | undefined): { nugget: number; sill: number } {
   const n = shape.length;
-  const w = new Float64Array(n);
-  for (let j = 0; j < n; j++) w[j] = b.pairs[j] / Math.max(b.gamma[j] * b.gamma[j], floor);
-  let nugget = fixedNugget ?? 0;
-  let sill = 0;
-  for (let iter = 0; iter < REWEIGHT_STEPS; iter++) {
-    let sw = 0, sg = 0, sgg = 0, sz = 0, sgz = 0;
-    for (let j = 0; j < n; j++) {
-      sw += w[j];
-      sg += w[j] * shape[j];
-      sgg += w[j] * shape[j] * shape[j];
-      sz += w[j] * b.gamma[j];
-      sgz += w[j] * shape[j] * b.gamma[j];
-    }
-    let nextNugget: number;
-    let nextSill: number;
-    const sillGivenNugget = (c0: number): number => (sgg > 0 ? Math.max(0, (sgz - c0 * sg) / sgg) : 0);
-    if (fixedNugget !== undefined) {
-      nextNugget = fixedNugget;
-      nextSill = sillGivenNugget(fixedNugget);
-    } else {
-      const det = sw * sgg - sg * sg;
-      nextNugget = det > 0 ? (sgg * sz - sg * sgz) / det : 0;
-      nextSill = det > 0 ? (sw * sgz - sg * sz) / det : 0;
-      if (nextNugget < 0 || !(det > 0)) {
-        nextNugget = 0;
-        nextSill = sillGivenNugget(0);
-      } else if (nextSill < 0) {
-        nextSill = 0;
-        nextNugget = sz / sw;
-      }
-    }
-    const settled = Math.abs(nextNugget - nugget) + Math.abs(nextSill - sill) <= 1e-13 * (Math.abs(nextNugget) + Math.abs(nextSill));
-    nugget = nextNugget;
-    sill = nextSill;
-    if (settled) break;
-    for (let j = 0; j < n; j++) {
-      const m = nugget + sill * shape[j];
-      w[j] = b.pairs[j] / Math.max(m * m, floor);
-    }
+  let sw = 0, sg = 0, sgg = 0, sz = 0, sgz = 0;
+  for (let j = 0; j < n; j++) {
+    sw += w[j];
+    sg += w[j] * shape[j];
+    sgg += w[j] * shape[j] * shape[j];
+    sz += w[j] * b.gamma[j];
+    sgz += w[j] * shape[j] * b.gamma[j];
   }
+  const sillGivenNugget = (c0: number): number => (sgg > 0 ? Math.max(0, (sgz - c0 * sg) / sgg) : 0);
+  if (fixedNugget !== undefined) return { nugget: fixedNugget, sill: sillGivenNugget(fixedNugget) };
+  const det = sw * sgg - sg * sg;
+  const nugget = det > 0 ? (sgg * sz - sg * sgz) / det : 0;
+  const sill = det > 0 ? (sw * sgz - sg * sz) / det : 0;
+  if (nugget < 0 || !(det > 0)) return { nugget: 0, sill: sillGivenNugget(0) };
+  if (sill < 0) return { nugget: sz / sw, sill: 0 };
   return { nugget, sill };
 }
 
 /**
- * Fits a variogram model to an experimental variogram by weighted least squares with Cressie's weights
- * N(h)/γ(h)² (Cressie 1985, Mathematical Geology 17(5), 563–586). GSLIB convention: `range` is the practical
- * range, `sill` the partial sill. Own fitter because no maintained npm package fits these models: the range is
+ * Fits a variogram model to an experimental variogram by weighted least squares with weights N(h)/γ̂(h)², pair count
+ * over squared semivariance (Cressie 1985, "Fitting variogram models by weighted least squares", Mathematical
+ * Geology 17(5), 563–586 — volume and pages from memory; see weightsOf for why γ̂ rather than the model γ).
+ * The practical range is bounded by the largest lag given: choose the lags (about half the largest separation).
+ * GSLIB convention: `range` is the practical range, `sill` the partial sill. Own fitter because no maintained npm package fits these models: the range is
  * searched on a log grid and refined by golden section, with nugget and sill solved exactly for each range.
  *
  * @example
@@ -129,15 +110,18 @@ export function fitVariogram(experimental: readonly VariogramLag[], options: Fit
   const floor = (maxGamma * 1e-9) ** 2;
   const shape = new Float64Array(bins.h.length);
 
+  const weights = weightsOf(bins, floor);
   const evaluate = (logRange: number): { score: number; nugget: number; sill: number } => {
     const range = Math.exp(logRange);
     for (let j = 0; j < shape.length; j++) shape[j] = modelShape(model, bins.h[j], range);
-    const { nugget, sill } = fitLinear(bins, shape, fixedNugget, floor);
-    return { score: cressie(bins, shape, nugget, sill), nugget, sill };
+    const { nugget, sill } = fitLinear(bins, weights, shape, fixedNugget);
+    return { score: criterion(bins, weights, shape, nugget, sill), nugget, sill };
   };
 
   const lo = Math.log(hMin / 4);
-  const hi = Math.log(hMax * 4);
+  // Bounded by the largest lag used: past it the data say nothing about the range, and a longer range only
+  // stretches the model's slope at short lags (common practice, no source).
+  const hi = Math.log(hMax);
   const step = (hi - lo) / GRID_STEPS;
   let bestI = 0;
   let bestScore = Infinity;

@@ -56,13 +56,17 @@ export const surfaceRequestBody = z.object({
     .default({ from: 'prospect', bufferKm: 10 }),
   method: z
     .discriminatedUnion('kind', [
-      z.object({ kind: z.literal('kriging'), model: z.enum(['spherical', 'exponential', 'gaussian']).default('spherical'), variogram: variogramSchema.nullable().default(null), maxNeighbours: z.number().int().min(3).max(64).default(16) }),
+      z.object({ kind: z.literal('kriging'), model: z.enum(['spherical', 'exponential', 'gaussian']).default('spherical'), variogram: variogramSchema.nullable().default(null), maxNeighbours: z.number().int().min(3).max(64).nullable().default(null) }),
       z.object({ kind: z.literal('idw'), power: z.number().min(0.5).max(6).default(2) }),
     ])
-    .default({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: 16 }),
+    .default({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: null }),
   cellSizeM: z.number().min(25, 'must be at least 25 m').max(10_000).default(250),
   /** The grid covers the prospect outline grown by this much, m. */
   extentBufferKm: z.number().min(0).max(100).default(5),
+  /** The depth unit the run's depth was entered in: the run's name gives the depth in it. */
+  depthUnit: z.enum(['m', 'ft']).optional(),
+  /** The unit the contour interval was entered in (m, ft, ppg, psi…): contours are labelled in it, so they read as round values. */
+  contourLabelUnit: z.string().max(16).optional(),
   /** Contour spacing of depth quantities, m. */
   contourIntervalM: z.number().positive().max(2000).default(50),
   /** Contour spacing of `emw_at_depth`, kg/m³ (default 20). */
@@ -77,6 +81,20 @@ export const surfaceRequestBody = z.object({
   }
 });
 export type SurfaceRequest = z.input<typeof surfaceRequestBody>;
+
+/** Kriging with `maxNeighbours: null` uses every well up to this many (one factorisation, no seams), the nearest {@link DEFAULT_NEIGHBOURS} above. */
+export const ALL_WELLS_MAX = 100;
+export const DEFAULT_NEIGHBOURS = 16;
+
+/**
+ * The neighbour limit a kriging run uses: undefined for all wells.
+ * @example krigingNeighbours(null, 54) // undefined
+ * @example krigingNeighbours(null, 500) // 16
+ */
+export function krigingNeighbours(maxNeighbours: number | null, wells: number): number | undefined {
+  const k = maxNeighbours ?? (wells <= ALL_WELLS_MAX ? undefined : DEFAULT_NEIGHBOURS);
+  return k === undefined || k >= wells ? undefined : k;
+}
 
 /**
  * The contour spacing a request asks for, in the SI unit of its quantity.

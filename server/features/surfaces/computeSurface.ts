@@ -12,7 +12,7 @@ import {
   type DataPoint,
   type Variogram,
 } from '../../../shared/interpolation';
-import { MAX_SURFACE_CELLS, contourIntervalOf, surfaceRequestBody, surfaceSiUnit, type Surface } from '../../../shared/schemas/surfaces';
+import { MAX_SURFACE_CELLS, contourIntervalOf, krigingNeighbours, surfaceRequestBody, surfaceSiUnit, type Surface } from '../../../shared/schemas/surfaces';
 import type { z } from 'zod';
 
 export type SurfaceParams = z.output<typeof surfaceRequestBody>;
@@ -49,6 +49,12 @@ const EXPERIMENTAL_LAGS = 12;
 const PROGRESS_CHUNK = 2000;
 /** More contour levels than this would draw a solid smear; the interval is widened and the run says so. */
 const MAX_CONTOUR_LEVELS = 200;
+
+/** The grid's neighbour rule applied to leave-one-out, where each estimate has one datum fewer. */
+function looNeighbours(maxNeighbours: number | null, wells: number): number | undefined {
+  const k = krigingNeighbours(maxNeighbours, wells);
+  return k === undefined ? undefined : Math.min(k, wells - 1);
+}
 
 /** Estimates the targets in chunks so the worker can report progress during the interpolation itself. */
 function inChunks<T, R>(targets: readonly T[], estimate: (chunk: T[]) => R[], progress: Progress): R[] {
@@ -130,6 +136,8 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
   } else if (params.method.kind === 'kriging') {
     let maxD = 0;
     for (let i = 0; i < data.length; i++) for (let j = i + 1; j < data.length; j++) maxD = Math.max(maxD, Math.hypot(data[i].x - data[j].x, data[i].y - data[j].y));
+    // Lags up to half the largest well separation: past it few pairs span the area and the estimates are erratic
+    // (common practice, no source). fitVariogram bounds the practical range by the largest lag it is given.
     experimental = experimentalVariogram(data, { lags: EXPERIMENTAL_LAGS, lagWidth: maxD / 2 / EXPERIMENTAL_LAGS });
     if (params.method.variogram) {
       const v = params.method.variogram;
@@ -141,7 +149,8 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
       fitted = true;
     }
     const v = variogram;
-    const maxNeighbours = Math.min(params.method.maxNeighbours, data.length);
+    // All wells up to ALL_WELLS_MAX: one factorisation for every cell and no seams where a neighbour set changes.
+    const maxNeighbours = krigingNeighbours(params.method.maxNeighbours, data.length);
     estimates = inChunks(targets, (chunk) => ordinaryKriging(data, v, chunk, { maxNeighbours }).map((e) => ({ value: e.value * scale, variance: e.variance * scale ** 2 })), progress);
   } else {
     const power = params.method.power;
@@ -151,7 +160,7 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
 
   const method =
     params.method.kind === 'kriging' && variogram
-      ? { kind: 'kriging' as const, variogram, maxNeighbours: Math.min(params.method.maxNeighbours, data.length - 1) }
+      ? { kind: 'kriging' as const, variogram, maxNeighbours: looNeighbours(params.method.kind === 'kriging' ? params.method.maxNeighbours : null, data.length) }
       : { kind: 'idw' as const, power: params.method.kind === 'idw' ? params.method.power : 2 };
   const loo = flat ? { rmse: 0, meanError: 0, residuals: data.map((d, index) => ({ index, observed: d.value, predicted: d.value, residual: 0 })) } : leaveOneOut(data, method);
 

@@ -1,3 +1,4 @@
+import { FT_M } from '../../../shared/units';
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import { AT_DEPTH_QUANTITIES, SURFACE_QUANTITY_LABELS, surfaceRequestBody, surfaceSiUnit, type Surface, type SurfaceExcludedWell, type SurfaceQuantity, type SurfaceSummary } from '../../../shared/schemas/surfaces';
@@ -95,6 +96,15 @@ async function atDepthPoints(db: Db, rows: Candidate[], params: Params, progress
   return { points, excluded, warnings };
 }
 
+/**
+ * A depth in the unit it was entered in, rounded to what was typed (10,000 ft, not 3048 m).
+ * @example depthText(3048, 'ft') // '10000 ft'
+ */
+export function depthText(depthM: number, unit: 'm' | 'ft' = 'm'): string {
+  const shown = unit === 'ft' ? depthM / FT_M : depthM;
+  return `${Number(shown.toFixed(1))} ${unit}`;
+}
+
 /** Gathers the wells, computes off the main thread, and stores the run. */
 export async function createSurface(db: Db, teamId: string, userId: string, prospectId: string, params: Params, progress: Progress = () => {}): Promise<Surface> {
   const prospect = await getProspect(db, teamId, prospectId);
@@ -104,7 +114,7 @@ export async function createSurface(db: Db, teamId: string, userId: string, pros
   const result = await runSurfaceInWorker({ points, outline: prospect.geometry, params }, progress);
   progress('saving', 0, 1);
   const method = params.method.kind === 'kriging' ? `ordinary kriging (${result.variogram?.model.model})` : `inverse distance (power ${params.method.power})`;
-  const at = params.depthTvdssM !== undefined && AT_DEPTH_QUANTITIES.includes(params.quantity) ? ` at ${params.depthTvdssM} m TVDSS` : '';
+  const at = params.depthTvdssM !== undefined && AT_DEPTH_QUANTITIES.includes(params.quantity) ? ` at ${depthText(params.depthTvdssM, params.depthUnit)} TVDSS` : '';
   const name = params.name ?? `${SURFACE_QUANTITY_LABELS[params.quantity]}${at} — ${method}`;
   const { grid, ...rest } = result;
   const [row] = await db

@@ -9,7 +9,8 @@ describe('toSurfaceRequest', () => {
     const body = toSurfaceRequest(DEFAULT_RUN_FORM, 'm');
     const parsed = surfaceRequestBody.parse(body);
     expect(parsed.wells).toEqual({ from: 'prospect', bufferKm: 30 });
-    expect(parsed.method).toEqual({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: 16 });
+    expect(parsed.method).toEqual({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: null });
+    expect(parsed.contourLabelUnit).toBe('m');
     expect(parsed.contourIntervalM).toBe(50);
     expect('name' in body).toBe(false);
   });

@@ -21,7 +21,8 @@ export interface SurfaceRunForm {
   nugget: number;
   sill: number;
   rangeKm: number;
-  maxNeighbours: number;
+  /** null: every well up to 100 wells (no seams), the nearest 16 above. */
+  maxNeighbours: number | null;
   power: number;
   cellSizeM: number;
   extentBufferKm: number;
@@ -46,7 +47,7 @@ export const DEFAULT_RUN_FORM: SurfaceRunForm = {
   nugget: 0,
   sill: 40_000,
   rangeKm: 15,
-  maxNeighbours: 16,
+  maxNeighbours: null,
   power: 2,
   cellSizeM: 250,
   extentBufferKm: 5,
@@ -99,6 +100,9 @@ export function toSurfaceRequest(form: SurfaceRunForm, depthUnit: DisplayDepthUn
     cellSizeM: form.cellSizeM,
     extentBufferKm: form.extentBufferKm,
   };
+  // Contours are labelled in the unit the interval was typed in, so they read as round values.
+  body.contourLabelUnit = kind === 'depth' ? depthUnit : surfaceDisplay(form.quantity, { depth: depthUnit, ...units }).unit;
+  if (atDepth) body.depthUnit = depthUnit;
   if (kind === 'depth') body.contourIntervalM = form.contourInterval * toSi;
   else if (kind === 'emw') body.contourIntervalKgM3 = form.contourInterval * toSi;
   else body.contourIntervalPa = form.contourInterval * toSi;

@@ -1,6 +1,8 @@
 import * as turf from '@turf/turf';
 import type { Polygon } from 'geojson';
+import proj4 from 'proj4';
 import { describe, expect, it } from 'vitest';
+import { leaveOneOut } from '../../../shared/interpolation';
 import { hiddenTopTvdssM } from '../../../server/db/seed/demoBasin/surfaces';
 import { demoTopPick } from '../../../server/db/seed/demoBasin/writeInterpretations';
 import { computeSurface, SurfaceInputError, type SurfaceInputPoint } from '../../../server/features/surfaces/computeSurface';
@@ -46,6 +48,7 @@ describe('TOP surface of the demo basin against its hidden truth', () => {
   };
   const kriged = run({ kind: 'kriging', model: 'spherical' });
   const inverse = run({ kind: 'idw', power: 2 });
+  const exponential = run({ kind: 'kriging', model: 'exponential' });
 
   it('reproduces the hidden surface within 120 m RMS inside the well hull (relief ≈ 1,900 m)', () => {
     expect(rmseAgainstTruth(kriged)).toBeLessThan(120);
@@ -60,6 +63,44 @@ describe('TOP surface of the demo basin against its hidden truth', () => {
     expect(kriged.crossValidation.rmse).toBeLessThan(300);
     expect(kriged.wells.every((x) => x.residual !== null)).toBe(true);
     expect(kriged.variogram?.fitted).toBe(true);
+  });
+
+  it('fits a practical range no longer than the largest lag used (about half the largest well separation)', () => {
+    for (const r of [kriged, exponential]) {
+      const lags = r.variogram!.experimental;
+      expect(r.variogram!.model.range).toBeLessThanOrEqual(lags[lags.length - 1].lagM * (1 + 1e-9));
+    }
+  });
+
+  // Leave-one-out standardised errors (observed − predicted)/σ: for a Gaussian error with the right σ, mean |z| ≈
+  // √(2/π) ≈ 0.8 and RMS z ≈ 1 (common practice, no source). Before the fit was bounded, σ at the wells was 3–4×
+  // the errors (RMS z ≈ 0.2).
+  const standardised = (r: ReturnType<typeof run>) => {
+    const conv = proj4('EPSG:4326', r.grid.projection);
+    const data = picks.map((p) => {
+      const [x, y] = conv.forward([p.lon, p.lat]);
+      return { x, y, value: p.value };
+    });
+    const loo = leaveOneOut(data, { kind: 'kriging', variogram: r.variogram!.model });
+    const z = loo.residuals.map((q) => q.residual / q.stdDev!);
+    return { meanAbs: z.reduce((a, b) => a + Math.abs(b), 0) / z.length, rms: Math.sqrt(z.reduce((a, b) => a + b * b, 0) / z.length), rmse: loo.rmse, meanSd: loo.residuals.reduce((a, q) => a + q.stdDev!, 0) / z.length };
+  };
+
+  it('gives kriging standard deviations consistent with the cross-validation errors (exponential model)', () => {
+    const z = standardised(exponential);
+    // measured 0.58 and 0.75
+    expect(z.meanAbs).toBeGreaterThan(0.5);
+    expect(z.meanAbs).toBeLessThan(1.2);
+    expect(z.rms).toBeGreaterThan(0.5);
+    expect(z.rms).toBeLessThan(2);
+  });
+
+  it('keeps the spherical standard deviation within 2× the errors (a spherical model is linear at the origin while the demo surface is smooth, so it overstates σ near wells)', () => {
+    const z = standardised(kriged);
+    // measured RMS z 0.46, mean σ 92 m against RMSE 62 m
+    expect(z.rms).toBeGreaterThan(0.4);
+    expect(z.rms).toBeLessThan(2);
+    expect(z.meanSd).toBeLessThan(2 * z.rmse);
   });
 
   it('draws closed contour rings that nest: the region deeper than a level lies inside the region of a shallower one', () => {
@@ -143,5 +184,26 @@ describe('quantities in other units and progress', () => {
     const r = surfaceRequestBody.safeParse({ quantity: 'emw_at_depth' });
     expect(r.success).toBe(false);
     expect(r.error!.issues[0]).toMatchObject({ path: ['depthTvdssM'], message: 'is required for emw_at_depth: the depth below sea level, m' });
+  });
+});
+
+describe('kriging neighbourhood', () => {
+  it('kriges with all wells for a small run by default, so contours have no seams where a neighbour set changes', () => {
+    // With every well in every system the estimate is one smooth function of position: adjacent cells never jump by
+    // more than the surface's slope allows. Compare against the explicit 16-neighbour run on the same picks.
+    const variogram = { model: 'spherical' as const, nugget: 0, sill: 55_000, range: 34_000 };
+    const all = run({ kind: 'kriging', variogram });
+    const nearest = run({ kind: 'kriging', variogram, maxNeighbours: 16 });
+    const everyWell = run({ kind: 'kriging', variogram, maxNeighbours: 64 });
+    expect(all.grid.values).toEqual(everyWell.grid.values);
+    expect(all.grid.values).not.toEqual(nearest.grid.values);
+  });
+
+  it('uses the nearest 16 above 100 wells', async () => {
+    const { krigingNeighbours } = await import('../../../shared/schemas/surfaces');
+    expect(krigingNeighbours(null, 100)).toBeUndefined();
+    expect(krigingNeighbours(null, 101)).toBe(16);
+    expect(krigingNeighbours(8, 54)).toBe(8);
+    expect(krigingNeighbours(64, 54)).toBeUndefined();
   });
 });
