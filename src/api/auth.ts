@@ -1,6 +1,12 @@
 import { z } from 'zod';
 import {
+  authOptionsSchema,
+  invitationCheckSchema,
+  resetCheckSchema,
   sessionSchema,
+  type AuthOptions,
+  type InvitationCheck,
+  type ResetCheck,
   type AcceptTokenBody,
   type ResetRequestBody,
   type Session,
@@ -56,4 +62,28 @@ export async function requestPasswordReset(body: ResetRequestBody, client: ApiCl
  */
 export function resetPassword(body: AcceptTokenBody, client: ApiClient = api): Promise<Session> {
   return client.post('/api/auth/reset', body, sessionSchema);
+}
+
+/**
+ * Harmless facts for the sign-in pages: whether mail stays on this machine (local mail fake) and how long links last.
+ * @example const { mailFake, resetLinkMinutes } = await fetchAuthOptions();
+ */
+export function fetchAuthOptions(client: ApiClient = api): Promise<AuthOptions> {
+  return client.get('/api/auth/options', authOptionsSchema);
+}
+
+/**
+ * What an invitation link says, checked when its page opens; rejects (404 not valid, 410 used or expired) with a readable message.
+ * @example const { email, teamName, existingAccount } = await checkInvitation(token);
+ */
+export function checkInvitation(token: string, client: ApiClient = api): Promise<InvitationCheck> {
+  return client.get(`/api/auth/invitations/${encodeURIComponent(token)}`, invitationCheckSchema);
+}
+
+/**
+ * Whether a password-reset link still works, checked when its page opens (404 not valid, 410 used or expired).
+ * @example const { expiresAt } = await checkResetLink(token);
+ */
+export function checkResetLink(token: string, client: ApiClient = api): Promise<ResetCheck> {
+  return client.get(`/api/auth/resets/${encodeURIComponent(token)}`, resetCheckSchema);
 }

@@ -3,10 +3,12 @@ import type { Role } from '@shared/auth/permissions';
 import {
   memberSchema,
   outboxMessageSchema,
+  pendingInvitationSchema,
   roleSchema,
   type InviteBody,
   type Member,
   type OutboxMessage,
+  type PendingInvitation,
 } from '@shared/schemas/auth';
 import { api, type ApiClient } from './client';
 
@@ -59,4 +61,28 @@ export function removeMember(teamId: string, userId: string, client: ApiClient =
  */
 export function listOutbox(teamId: string, client: ApiClient = api): Promise<OutboxMessage[]> {
   return client.get(`${teamPath(teamId)}/outbox`, z.array(outboxMessageSchema));
+}
+
+/**
+ * The team's invitations nobody has used yet and that still work (admins only).
+ * @example const pending = await listInvitations(teamId);
+ */
+export function listInvitations(teamId: string, client: ApiClient = api): Promise<PendingInvitation[]> {
+  return client.get(`${teamPath(teamId)}/invitations`, z.array(pendingInvitationSchema));
+}
+
+/**
+ * Withdraws a pending invitation; its link stops working.
+ * @example await revokeInvitation(teamId, invitationId);
+ */
+export function revokeInvitation(teamId: string, invitationId: string, client: ApiClient = api): Promise<void> {
+  return client.del(`${teamPath(teamId)}/invitations/${encodeURIComponent(invitationId)}`);
+}
+
+/**
+ * Mails a new link for a pending invitation with a fresh expiry; the old link stops working.
+ * @example const renewed = await resendInvitation(teamId, invitationId);
+ */
+export function resendInvitation(teamId: string, invitationId: string, client: ApiClient = api): Promise<PendingInvitation> {
+  return client.post(`${teamPath(teamId)}/invitations/${encodeURIComponent(invitationId)}/resend`, {}, pendingInvitationSchema);
 }
