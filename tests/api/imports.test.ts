@@ -191,6 +191,9 @@ describe('surveys and pressures', () => {
     const stations = await team.agent.get(`/api/teams/${team.teamId}/wells/${wellId}/surveys`);
     // Straight hold from 2000 m to 4100 m at 30°: ΔTVD = 2100·cos 30° exactly (geometry).
     expect(stations.body[5].tvdM - stations.body[4].tvdM).toBeCloseTo(2100 * Math.cos(Math.PI / 6), 6);
+    // TEST-2 has TD 4100 m MD and no TD TVD: the survey, which reaches TD, gives it.
+    const detail = (await team.agent.get(`/api/teams/${team.teamId}/wells/${wellId}`)).body;
+    expect(detail.tdTvdM).toBeCloseTo(stations.body[5].tvdM, 6);
 
     const res = await post('pressures-mixed.csv', 'pressures');
     expect(res.status).toBe(201);
@@ -207,6 +210,19 @@ describe('surveys and pressures', () => {
     // 16.5 ppg: 1 ppg = 119.8264 kg/m³ (12/231 psi/ft per ppg; NIST US gallon).
     expect(lot.emwKgM3).toBeCloseTo(16.5 * 119.826427, 3);
     expect(lot.unitEntered).toBe('ppg');
+  });
+
+  it('stores TD TVD from the survey when a new TD lies beyond the last station, straight along its inclination', async () => {
+    const header = (td: number) => Buffer.from(`name,lon,lat,td_md (m)\nTDTVD-1,-101.3,-32.3,${td}\n`);
+    expect((await post('tdtvd-a.csv', 'wells', {}, header(1000))).status).toBe(201);
+    const survey = Buffer.from('well,md (m),inc,azi\nTDTVD-1,0,0,0\nTDTVD-1,500,0,0\nTDTVD-1,1000,60,90\n');
+    expect((await post('tdtvd-survey.csv', 'surveys', {}, survey)).status).toBe(201);
+    const id = (await team.agent.get(`/api/teams/${team.teamId}/wells?q=TDTVD-1`)).body.items[0].id;
+    const stations = (await team.agent.get(`/api/teams/${team.teamId}/wells/${id}/surveys`)).body;
+    expect((await team.agent.get(`/api/teams/${team.teamId}/wells/${id}`)).body.tdTvdM).toBeCloseTo(stations[2].tvdM, 6);
+    // The header re-imported with TD 1200 m and no TD TVD: 200 m on at 60° adds 200·cos 60° = 100 m (geometry).
+    expect((await post('tdtvd-b.csv', 'wells', {}, header(1200))).status).toBe(201);
+    expect((await team.agent.get(`/api/teams/${team.teamId}/wells/${id}`)).body.tdTvdM).toBeCloseTo(stations[2].tvdM + 100, 6);
   });
 
   it('converts psi and MPa values to Pa exactly', async () => {

@@ -9,6 +9,7 @@ import type { PressurePlanRow, SurveyPlan, TopPlanRow, WellPlanRow } from './csv
 import type { Progress } from '../../lib/jobs';
 import type { LasPlan } from './lasPlan';
 import { tvdFromSurvey } from './wellLookup';
+import { fillTdTvdFromSurvey } from '../wells/tdTvd';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
@@ -85,6 +86,8 @@ export async function writeWells(tx: Tx, teamId: string, userId: string, uploadI
     toUpdate.map((r) => [r.existingId, ...wellValues(r, userId, uploadId, false), null, null]),
   );
   progress('updating wells', toUpdate.length, toUpdate.length);
+  // A new TD on a surveyed well with no TD TVD gets one from the survey (new wells have no survey yet).
+  await fillTdTvdFromSurvey(tx, toUpdate.filter((r) => r.tdMdM !== null && r.tdTvdM === null).map((r) => r.existingId!));
   return { created: toInsert.length, updated: toUpdate.length };
 }
 
@@ -115,6 +118,7 @@ export async function writeSurveys(tx: Tx, uploadId: string, plans: SurveyPlan[]
     await bulkUpdate(tx, table === pressureObservations ? 'pressure_observations' : 'formation_tops', ['id', 'uuid'], [['tvd_m', 'float8'], ...extra], updates.map((u) => (extra.length ? [...u, null] : u)));
     retvd += updates.length;
   }
+  await fillTdTvdFromSurvey(tx, wellIds);
   return { created: rows.length, wells: plans.length, tvdRecomputed: retvd };
 }
 
