@@ -59,8 +59,9 @@ async function runApp() {
   if (!databaseUrl) {
     ensureDebianPackages({ postgres: true });
     const dir = join(dataDir, 'pg');
-    // Reading mail while `npm start` runs must not stop the cluster the app is using.
-    const alreadyRunning = mode === 'mail' && existsSync(join(dir, 'postmaster.pid'));
+    // A one-shot command (reading mail, the first admin, re-seeding) while `npm start` runs must not stop the
+    // cluster the app is using.
+    const alreadyRunning = ['mail', 'admin', 'seed'].includes(mode) && existsSync(join(dir, 'postmaster.pid'));
     if (!alreadyRunning) cleanups.push(() => stopCluster(cluster ?? { dir })); // also when interrupted while it starts
     cluster = await startPrivateCluster({ dir, port: pgPort, throwaway: false });
     databaseUrl = cluster.databaseUrl;
