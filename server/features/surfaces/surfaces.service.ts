@@ -85,13 +85,13 @@ async function atDepthPoints(db: Db, rows: Candidate[], params: Params, progress
   if (points.length === 0 && reach && reach.baseTvdssM < depth) {
     throw badRequest(
       'depth_beyond_logs',
-      `depthTvdssM: no well's pore-pressure curve reaches ${depth} m TVDSS (the deepest ends at ${Math.round(reach.baseTvdssM)} m TVDSS in ${reach.name}); choose a shallower depth.`,
+      `depthTvdssM: no well's pore-pressure curve reaches ${depthText(depth, params.depthUnit)} TVDSS (the deepest ends at ${depthText(reach.baseTvdssM, params.depthUnit, 0)} TVDSS in ${reach.name}); choose a shallower depth.`,
       { excluded },
     );
   }
-  const warnings = excluded.length ? [`${excluded.length} of the ${rows.length} wells have no pore pressure at ${depth} m TVDSS and were left out (see the list of wells left out).`] : [];
+  const warnings = excluded.length ? [`${excluded.length} of the ${rows.length} wells have no pore pressure at ${depthText(depth, params.depthUnit)} TVDSS and were left out (see the list of wells left out).`] : [];
   if (points.length < 3) {
-    throw badRequest('too_few_wells', `A surface needs at least 3 wells with a pore pressure at ${depth} m TVDSS; ${points.length} of the ${rows.length} wells found have one.`, { warnings, excluded });
+    throw badRequest('too_few_wells', `A surface needs at least 3 wells with a pore pressure at ${depthText(depth, params.depthUnit)} TVDSS; ${points.length} of the ${rows.length} wells found have one.`, { warnings, excluded });
   }
   return { points, excluded, warnings };
 }
@@ -100,9 +100,9 @@ async function atDepthPoints(db: Db, rows: Candidate[], params: Params, progress
  * A depth in the unit it was entered in, rounded to what was typed (10,000 ft, not 3048 m).
  * @example depthText(3048, 'ft') // '10000 ft'
  */
-export function depthText(depthM: number, unit: 'm' | 'ft' = 'm'): string {
+export function depthText(depthM: number, unit: 'm' | 'ft' = 'm', digits = 1): string {
   const shown = unit === 'ft' ? depthM / FT_M : depthM;
-  return `${Number(shown.toFixed(1))} ${unit}`;
+  return `${Number(shown.toFixed(digits))} ${unit}`;
 }
 
 /** Gathers the wells, computes off the main thread, and stores the run. */
