@@ -37,6 +37,8 @@ const lasFactsSchema = z.object({
     well: z.object({ id: z.string(), name: z.string(), uwi: z.string().nullable() }).nullable(),
     wellLabel: z.string(),
     matchedBy: z.enum(['chosen', 'uwi', 'name']).nullable(),
+    // The file gives X/Y but no LATI/LONG: only then does the EPSG code of X/Y matter.
+    xyOnly: z.boolean().optional(),
     // Set when no well matches and the file's header places one: the commit creates it.
     createWell: z.object({ name: z.string(), uwi: z.string().nullable(), lon: z.number(), lat: z.number(), locationFrom: z.string() }).nullable().optional(),
     indexUnit: z.string(),

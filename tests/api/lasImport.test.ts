@@ -164,7 +164,11 @@ describe('LAS 2.0 import', () => {
 
     const res = await post('osprey.las', {}, Buffer.from(text));
     expect(res.status).toBe(201);
-    expect(res.body.outcome).toMatchObject({ created: 4, wellCreated: true });
+    expect(res.body.outcome).toMatchObject({ created: 4, wellCreated: true, wellName: 'OSPREY-9' });
+    // LATI/LONG place it: no EPSG code for X/Y is needed, so the page shows no picker for one.
+    expect(preview.body.las.plan.xyOnly).toBe(false);
+    const history = (await team.agent.get(`${base}/imports`)).body;
+    expect(JSON.stringify(history)).toContain('"wellName":"OSPREY-9"');
     const list = (await team.agent.get(`${base}/wells?q=OSPREY-9`)).body;
     expect(list.total).toBe(1);
     expect(list.items[0]).toMatchObject({ name: 'OSPREY-9', uwi: '199999999999W599' });
@@ -231,6 +235,7 @@ describe('LAS 2.0 import', () => {
       },
       { line: 13, column: 'X', message: 'the file gives X/Y but no LATI/LONG: choose the EPSG code of X/Y to create well "HERON-2"' },
     ]);
+    expect(bare.body.las.plan.xyOnly).toBe(true);
     const res = await post('heron.las', { dryRun: 'true', epsg: '32713' }, Buffer.from(text));
     expect(res.body.problems).toEqual([]);
     // Reference: proj4 itself, the library the import converts with.

@@ -224,5 +224,6 @@ export async function writeLasCurves(tx: Tx, teamId: string, userId: string, upl
     });
     progress('writing log curves', ++done, las.curves.length);
   }
-  return { created: las.curves.length, wellCreated: !plan.well && !!nw, wellId };
+  // The upload history names the well: ids mean nothing to a reader of the list.
+  return { created: las.curves.length, wellCreated: !plan.well && !!nw, wellId, wellName: plan.well?.name ?? nw?.name ?? null };
 }

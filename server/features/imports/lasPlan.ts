@@ -49,6 +49,8 @@ export interface LasPlan {
   wellLabel: string;
   /** How the well was matched: by the chosen id, the UWI/API, or the WELL name. */
   matchedBy: 'chosen' | 'uwi' | 'name' | null;
+  /** The file places its well by X/Y alone (no LATI/LONG), so the EPSG code of X/Y matters. */
+  xyOnly: boolean;
   indexUnit: string;
   topMdM: number;
   baseMdM: number;
@@ -218,6 +220,10 @@ export function planLas(
     createWell,
     wellLabel,
     matchedBy,
+    xyOnly: (() => {
+      const loc = readLasLocation(las);
+      return !!(loc.x && loc.y && !loc.lat && !loc.lon);
+    })(),
     indexUnit: las.index.rawUnit,
     topMdM: md.length ? md[0] : NaN,
     baseMdM: md.length ? md[md.length - 1] : NaN,

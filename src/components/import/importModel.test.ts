@@ -175,4 +175,9 @@ describe('outcomeSummary', () => {
     expect(outcomeSummary('las', { created: 4, wellCreated: true, replaced: 0, skippedLines: [] })).toBe('4 log curves into a well created from the file');
     expect(outcomeSummary('pressures', { created: 4, replaced: 4, skippedLines: [] })).toBe('4 pressure observations · 4 rows of the earlier import replaced');
   });
+
+  it('names the well a LAS import wrote to, as the server records it', () => {
+    expect(outcomeSummary('las', { created: 3, wellCreated: false, wellName: 'KESTREL-3', skippedLines: [] })).toBe('3 log curves into well KESTREL-3');
+    expect(outcomeSummary('las', { created: 4, wellCreated: true, wellName: 'OSPREY-9', skippedLines: [] })).toBe('4 log curves into new well OSPREY-9 (created from the file)');
+  });
 });

@@ -248,7 +248,13 @@ export function outcomeSummary(kind: ImportKind, outcome: Record<string, unknown
     surveys: `${plural(created, 'station')}${wells === null ? '' : ` for ${plural(wells, 'well')}`}`,
     pressures: `${plural(created, 'pressure observation')}`,
     tops: `${plural(created, 'formation top')}`,
-    las: `${plural(created, 'log curve')}${outcome.wellCreated === true ? ' into a well created from the file' : ''}`,
+    las: `${plural(created, 'log curve')}${
+      typeof outcome.wellName === 'string'
+        ? ` into ${outcome.wellCreated === true ? 'new well' : 'well'} ${outcome.wellName}${outcome.wellCreated === true ? ' (created from the file)' : ''}`
+        : outcome.wellCreated === true
+          ? ' into a well created from the file'
+          : ''
+    }`,
   };
   const replaced = typeof outcome.replaced === 'number' && outcome.replaced > 0 ? ` · ${plural(outcome.replaced, 'row')} of the earlier import replaced` : '';
   return `${main[kind]}${replaced}${skipped > 0 ? ` · ${plural(skipped, 'line')} skipped` : ''}`;
