@@ -77,6 +77,9 @@ function fitLinear(b: Bins, w: Float64Array, shape: Float64Array, fixedNugget: n
   return { nugget, sill };
 }
 
+/** Least share of the total sill a fitted gaussian keeps as nugget (common practice, no source). */
+export const GAUSSIAN_NUGGET_SHARE = 0.01;
+
 /**
  * Fits a variogram model to an experimental variogram by weighted least squares with weights N(h)/γ̂(h)², pair count
  * over squared semivariance (Cressie 1985, "Fitting variogram models by weighted least squares", Mathematical
@@ -115,6 +118,11 @@ export function fitVariogram(experimental: readonly VariogramLag[], options: Fit
     const range = Math.exp(logRange);
     for (let j = 0; j < shape.length; j++) shape[j] = modelShape(model, bins.h[j], range);
     const { nugget, sill } = fitLinear(bins, weights, shape, fixedNugget);
+    if (model === 'gaussian' && fixedNugget === undefined && nugget < GAUSSIAN_NUGGET_SHARE * (nugget + sill)) {
+      // The smooth gaussian without a nugget makes the kriging system nearly singular; a small nugget keeps it solvable.
+      const held = fitLinear(bins, weights, shape, GAUSSIAN_NUGGET_SHARE * (nugget + sill));
+      return { score: criterion(bins, weights, shape, held.nugget, held.sill), nugget: held.nugget, sill: held.sill };
+    }
     return { score: criterion(bins, weights, shape, nugget, sill), nugget, sill };
   };
 
