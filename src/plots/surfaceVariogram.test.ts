@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { experimentalMarks, variogramCurve, variogramMaxLagM } from './surfaceVariogram';
+import { experimentalMarks, risesPastSill, variogramCurve, variogramMaxLagM } from './surfaceVariogram';
 
 // Model formulas with practical range a (Deutsch & Journel 1998, GSLIB, 2nd ed., §II.3):
 // spherical γ = c0 + c(1.5 h/a − 0.5 (h/a)³) for h < a; exponential γ = c0 + c(1 − e^(−3h/a)).
@@ -46,5 +46,14 @@ describe('variogramMaxLagM', () => {
 
   it('reaches 10 % past the longer of the last lag and the range', () => {
     expect(variogramMaxLagM({ model: { model: 'spherical', nugget: 0, sill: 1, range: 9000 }, experimental: [{ lagM: 12_000, gamma: 1, pairs: 3 }], fitted: true })).toBeCloseTo(13_200, 6);
+  });
+});
+
+describe('risesPastSill', () => {
+  const base = { model: { model: 'spherical' as const, nugget: 0, sill: 100, range: 10_000 }, fitted: true };
+  it('flags experimental points well above the total sill past the range, and nothing else', () => {
+    expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 80, pairs: 20 }, { lagM: 15_000, gamma: 450, pairs: 30 }] })).toBe(true);
+    expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 80, pairs: 20 }, { lagM: 15_000, gamma: 110, pairs: 30 }] })).toBe(false);
+    expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 900, pairs: 20 }] })).toBe(false);
   });
 });

@@ -58,3 +58,17 @@ export function variogramMaxLagM(v: SurfaceVariogram): number {
   if (lastLag === 0) return v.model.range * 1.1;
   return Math.min(Math.max(lastLag, v.model.range), 2 * lastLag) * 1.1;
 }
+
+/**
+ * Whether the experimental variogram keeps climbing well past the model's total sill — the mark of a regional trend
+ * (the TOP deepening away from a depocentre), which no stationary model follows at long lags. The fit then follows the
+ * short lags that govern the estimate between nearby wells, and the chart should say so. "Well past" is the mean of the
+ * lags beyond the range above twice the total sill (common practice, no source).
+ * @example risesPastSill({ model: { model: 'spherical', nugget: 0, sill: 10, range: 1000 }, experimental: [{ lagM: 2000, gamma: 50, pairs: 9 }], fitted: true }) // true
+ */
+export function risesPastSill(v: SurfaceVariogram): boolean {
+  const beyond = v.experimental.filter((l) => l.lagM > v.model.range);
+  if (beyond.length === 0) return false;
+  const mean = beyond.reduce((a, l) => a + l.gamma, 0) / beyond.length;
+  return mean > 2 * (v.model.nugget + v.model.sill);
+}
