@@ -54,6 +54,10 @@ describe('risesPastSill', () => {
   it('flags experimental points well above the total sill past the range, and nothing else', () => {
     expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 80, pairs: 20 }, { lagM: 15_000, gamma: 450, pairs: 30 }] })).toBe(true);
     expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 80, pairs: 20 }, { lagM: 15_000, gamma: 110, pairs: 30 }] })).toBe(false);
-    expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 900, pairs: 20 }] })).toBe(false);
+    expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 90, pairs: 20 }] })).toBe(false);
+    // The fit bounds the range at the last lag: then the outer third of the lags is read (an EMW run looked like this).
+    const bounded = { ...base, model: { ...base.model, sill: 0.0116, range: 30_000 } };
+    const lags = [3000, 9000, 15_000, 21_000, 27_000, 30_000].map((lagM, k) => ({ lagM, gamma: 0.004 + 0.02 * k, pairs: 20 }));
+    expect(risesPastSill({ ...bounded, experimental: lags })).toBe(true);
   });
 });

@@ -62,13 +62,16 @@ export function variogramMaxLagM(v: SurfaceVariogram): number {
 /**
  * Whether the experimental variogram keeps climbing well past the model's total sill — the mark of a regional trend
  * (the TOP deepening away from a depocentre), which no stationary model follows at long lags. The fit then follows the
- * short lags that govern the estimate between nearby wells, and the chart should say so. "Well past" is the mean of the
- * lags beyond the range above twice the total sill (common practice, no source).
+ * short lags that govern the estimate between nearby wells, and the chart should say so. Read on the outer lags: those
+ * beyond the range, or the outer third when the range reaches the last lag (the fit bounds it there); "well past" is
+ * their mean above twice the total sill (common practice, no source).
  * @example risesPastSill({ model: { model: 'spherical', nugget: 0, sill: 10, range: 1000 }, experimental: [{ lagM: 2000, gamma: 50, pairs: 9 }], fitted: true }) // true
  */
 export function risesPastSill(v: SurfaceVariogram): boolean {
-  const beyond = v.experimental.filter((l) => l.lagM > v.model.range);
-  if (beyond.length === 0) return false;
-  const mean = beyond.reduce((a, l) => a + l.gamma, 0) / beyond.length;
+  const lastLag = Math.max(0, ...v.experimental.map((l) => l.lagM));
+  const from = Math.min(v.model.range, (2 / 3) * lastLag);
+  const outer = v.experimental.filter((l) => l.lagM > from);
+  if (outer.length === 0) return false;
+  const mean = outer.reduce((a, l) => a + l.gamma, 0) / outer.length;
   return mean > 2 * (v.model.nugget + v.model.sill);
 }
