@@ -14,3 +14,5 @@ export { grid } from './grid';
 export type { Grid, GridOptions } from './grid';
 export { createNeighbourIndex } from './neighbours';
 export type { NeighbourIndex } from './neighbours';
+export { fitPlanarTrend } from './planarTrend';
+export type { PlanarTrend } from './planarTrend';

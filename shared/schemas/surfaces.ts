@@ -56,10 +56,10 @@ export const surfaceRequestBody = z.object({
     .default({ from: 'prospect', bufferKm: 10 }),
   method: z
     .discriminatedUnion('kind', [
-      z.object({ kind: z.literal('kriging'), model: z.enum(['spherical', 'exponential', 'gaussian']).default('spherical'), variogram: variogramSchema.nullable().default(null), maxNeighbours: z.number().int().min(3).max(64).nullable().default(null) }),
+      z.object({ kind: z.literal('kriging'), model: z.enum(['spherical', 'exponential', 'gaussian']).default('spherical'), variogram: variogramSchema.nullable().default(null), maxNeighbours: z.number().int().min(3).max(64).nullable().default(null), trend: z.enum(['none', 'planar']).default('none') }),
       z.object({ kind: z.literal('idw'), power: z.number().min(0.5).max(6).default(2) }),
     ])
-    .default({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: null }),
+    .default({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: null, trend: 'none' }),
   cellSizeM: z.number().min(25, 'must be at least 25 m').max(10_000).default(250),
   /** The grid covers the prospect outline grown by this much, m. */
   extentBufferKm: z.number().min(0).max(100).default(5),

@@ -35,6 +35,16 @@ describe('TOP surfaces over a demo prospect', () => {
     expect(res.body.wells.every((w: { interpretationVersion: number }) => w.interpretationVersion === 1)).toBe(true);
   });
 
+  it('kriges the residuals of a planar regional trend when asked, and stores how it was run', async () => {
+    const res = await geo
+      .post(`${base}/prospects/${prospect.id}/surfaces`)
+      .send({ wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 500, contourIntervalM: 50, method: { kind: 'kriging', model: 'exponential', trend: 'planar' } });
+    expect(res.status).toBe(201);
+    expect(res.body.warnings.some((w: string) => w.startsWith('A planar regional trend was removed before kriging'))).toBe(true);
+    const again = await geo.get(`${base}/surfaces/${res.body.id}`);
+    expect(again.body.params.method.trend).toBe('planar');
+  });
+
   it('lists the run and reads the value at a planned well with its uncertainty', async () => {
     const list = await geo.get(`${base}/prospects/${prospect.id}/surfaces`);
     expect(list.body.map((s: { id: string }) => s.id)).toContain(surfaceId);

@@ -4,12 +4,14 @@ import proj4 from 'proj4';
 import type { Polygon } from 'geojson';
 import {
   experimentalVariogram,
+  fitPlanarTrend,
   fitVariogram,
   grid as makeGrid,
   idw,
   leaveOneOut,
   ordinaryKriging,
   type DataPoint,
+  type PlanarTrend,
   type Variogram,
 } from '../../../shared/interpolation';
 import { MAX_SURFACE_CELLS, contourIntervalOf, krigingNeighbours, surfaceRequestBody, surfaceSiUnit, type Surface } from '../../../shared/schemas/surfaces';
@@ -129,16 +131,29 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
   let experimental: ReturnType<typeof experimentalVariogram> = [];
   let fitted = false;
   let estimates: { value: number; variance: number | null }[];
+  let trend: PlanarTrend | null = null;
+  let krigData = data;
   progress('interpolating', 0, targets.length);
   if (flat) {
     warnings.push(`All ${data.length} wells have the same value (${values[0] * scale}): the surface is flat and its kriging variance is zero.`);
     estimates = targets.map(() => ({ value: values[0] * scale, variance: params.method.kind === 'kriging' ? 0 : null }));
   } else if (params.method.kind === 'kriging') {
+    // Regression kriging when asked: a least-squares plane takes out the regional trend, the residuals are kriged,
+    // and the plane is added back (its own estimation error is not in the variance).
+    if (params.method.trend === 'planar') {
+      if (data.length < 4) throw new SurfaceInputError('Removing a planar trend needs at least 4 wells; krige without it, or add wells.');
+      const plane = fitPlanarTrend(data);
+      trend = plane;
+      krigData = data.map((d) => ({ ...d, value: d.value - plane.evaluate(d.x, d.y) }));
+      const perKm = Math.hypot(plane.b, plane.c) * 1000 * scale;
+      const towards = ((Math.atan2(plane.b, plane.c) * 180) / Math.PI + 360) % 360;
+      warnings.push(`A planar regional trend was removed before kriging (rising ${Number(perKm.toPrecision(3))} ${surfaceSiUnit(params.quantity)} per km toward ${Math.round(towards)}°); the variogram is of the residuals.`);
+    }
     let maxD = 0;
     for (let i = 0; i < data.length; i++) for (let j = i + 1; j < data.length; j++) maxD = Math.max(maxD, Math.hypot(data[i].x - data[j].x, data[i].y - data[j].y));
     // Lags up to half the largest well separation: past it few pairs span the area and the estimates are erratic
     // (common practice, no source). fitVariogram bounds the practical range by the largest lag it is given.
-    experimental = experimentalVariogram(data, { lags: EXPERIMENTAL_LAGS, lagWidth: maxD / 2 / EXPERIMENTAL_LAGS });
+    experimental = experimentalVariogram(krigData, { lags: EXPERIMENTAL_LAGS, lagWidth: maxD / 2 / EXPERIMENTAL_LAGS });
     if (params.method.variogram) {
       const v = params.method.variogram;
       variogram = { ...v, nugget: v.nugget / scale ** 2, sill: v.sill / scale ** 2 };
@@ -151,7 +166,12 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
     const v = variogram;
     // All wells up to ALL_WELLS_MAX: one factorisation for every cell and no seams where a neighbour set changes.
     const maxNeighbours = krigingNeighbours(params.method.maxNeighbours, data.length);
-    estimates = inChunks(targets, (chunk) => ordinaryKriging(data, v, chunk, { maxNeighbours }).map((e) => ({ value: e.value * scale, variance: e.variance * scale ** 2 })), progress);
+    const t = trend;
+    estimates = inChunks(
+      targets,
+      (chunk) => ordinaryKriging(krigData, v, chunk, { maxNeighbours }).map((e, k) => ({ value: (e.value + (t ? t.evaluate(chunk[k].x, chunk[k].y) : 0)) * scale, variance: e.variance * scale ** 2 })),
+      progress,
+    );
   } else {
     const power = params.method.power;
     estimates = inChunks(targets, (chunk) => idw(data, chunk, { power }).map((value) => ({ value: value * scale, variance: null as number | null })), progress);
@@ -162,7 +182,10 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
     params.method.kind === 'kriging' && variogram
       ? { kind: 'kriging' as const, variogram, maxNeighbours: looNeighbours(params.method.kind === 'kriging' ? params.method.maxNeighbours : null, data.length) }
       : { kind: 'idw' as const, power: params.method.kind === 'idw' ? params.method.power : 2 };
-  const loo = flat ? { rmse: 0, meanError: 0, residuals: data.map((d, index) => ({ index, observed: d.value, predicted: d.value, residual: 0 })) } : leaveOneOut(data, method);
+  const looRaw = flat ? { rmse: 0, meanError: 0, residuals: data.map((d, index) => ({ index, observed: d.value, predicted: d.value, residual: 0 })) } : leaveOneOut(krigData, method);
+  // With a trend removed the residuals were cross-validated (the plane fitted on all wells); the plane goes back on.
+  const plane = trend;
+  const loo = plane ? { ...looRaw, residuals: looRaw.residuals.map((r) => ({ ...r, observed: data[r.index].value, predicted: r.predicted + plane.evaluate(data[r.index].x, data[r.index].y) })) } : looRaw;
 
   const cellValues: (number | null)[] = new Array(g.nx * g.ny).fill(null);
   const cellStd: (number | null)[] | null = params.method.kind === 'kriging' ? new Array(g.nx * g.ny).fill(null) : null;

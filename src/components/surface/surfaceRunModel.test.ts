@@ -9,7 +9,7 @@ describe('toSurfaceRequest', () => {
     const body = toSurfaceRequest(DEFAULT_RUN_FORM, 'm');
     const parsed = surfaceRequestBody.parse(body);
     expect(parsed.wells).toEqual({ from: 'prospect', bufferKm: 30 });
-    expect(parsed.method).toEqual({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: null });
+    expect(parsed.method).toEqual({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: null, trend: 'none' });
     expect(parsed.contourLabelUnit).toBe('m');
     expect(parsed.contourIntervalM).toBe(50);
     expect('name' in body).toBe(false);
@@ -24,6 +24,11 @@ describe('toSurfaceRequest', () => {
     expect(v.nugget).toBeCloseTo(9.290304, 10);
     expect(v.sill).toBeCloseTo(929.0304, 8);
     expect(surfaceRequestBody.safeParse(body).success).toBe(true);
+  });
+
+  it('asks for regression kriging when the trend switch is on', () => {
+    const parsed = surfaceRequestBody.parse(toSurfaceRequest({ ...DEFAULT_RUN_FORM, removeTrend: true }, 'm'));
+    expect(parsed.method).toMatchObject({ kind: 'kriging', trend: 'planar' });
   });
 
   it('uses a planned well’s offset set and inverse distance when asked', () => {

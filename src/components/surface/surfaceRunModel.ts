@@ -15,6 +15,8 @@ export interface SurfaceRunForm {
   method: 'kriging' | 'idw';
   model: VariogramModelName;
   variogramByHand: boolean;
+  /** Regression kriging: take a least-squares plane out first, krige the residuals, put the plane back. */
+  removeTrend: boolean;
   /** For EMW and overpressure: the depth below sea level, in the display depth unit. */
   depth: number | null;
   /** In the square of the quantity's display unit (m², ft², sg², MPa²…). */
@@ -43,6 +45,7 @@ export const DEFAULT_RUN_FORM: SurfaceRunForm = {
   method: 'kriging',
   model: 'spherical',
   variogramByHand: false,
+  removeTrend: false,
   depth: null,
   nugget: 0,
   sill: 40_000,
@@ -91,6 +94,7 @@ export function toSurfaceRequest(form: SurfaceRunForm, depthUnit: DisplayDepthUn
           kind: 'kriging',
           model: form.model,
           maxNeighbours: form.maxNeighbours,
+          trend: form.removeTrend ? 'planar' : 'none',
           variogram: form.variogramByHand ? { model: form.model, nugget: form.nugget * toSi * toSi, sill: form.sill * toSi * toSi, range: form.rangeKm * 1000 } : null,
         };
   const body: SurfaceRequest = {

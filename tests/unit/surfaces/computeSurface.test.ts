@@ -111,6 +111,22 @@ describe('TOP surface of the demo basin against its hidden truth', () => {
     expect(rmseAgainstTruth(gaussian)).toBeLessThan(150);
   });
 
+  it('with a planar trend removed, kriges the residuals: no worse against the truth, and a variogram that levels off', () => {
+    const detrended = run({ kind: 'kriging', model: 'spherical', trend: 'planar' });
+    expect(detrended.warnings.some((w) => /^A planar regional trend was removed before kriging \(rising [\d.]+ m per km toward \d+°\)/.test(w))).toBe(true);
+    expect(rmseAgainstTruth(detrended)).toBeLessThan(rmseAgainstTruth(kriged) * 1.1);
+    // The residual variogram's outer lags are far closer to its model's sill than the raw ones (the trend was most of the rise).
+    const outerOverSill = (r: ReturnType<typeof run>) => {
+      const v = r.variogram!;
+      const last = Math.max(...v.experimental.map((l) => l.lagM));
+      const outer = v.experimental.filter((l) => l.lagM > (2 / 3) * last);
+      return outer.reduce((a, l) => a + l.gamma, 0) / outer.length / (v.model.nugget + v.model.sill);
+    };
+    expect(outerOverSill(detrended)).toBeLessThan(outerOverSill(kriged));
+    // Cross-validation reports predictions with the plane put back, on the wells' own values.
+    for (const w of detrended.wells) expect(w.predicted! - w.value).toBeCloseTo(w.residual!, 6);
+  });
+
   it('draws closed contour rings that nest: the region deeper than a level lies inside the region of a shallower one', () => {
     const features = kriged.contours.features as { properties: { value: number }; geometry: { coordinates: number[][][][] } }[];
     expect(features.length).toBeGreaterThan(3);
