@@ -118,7 +118,7 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
     expect(res.body.depthTvdssM).toBe(3000);
     expect(res.body.rmseM).toBeNull();
     expect(res.body.rmse).toBeGreaterThan(0);
-    expect(res.body.name).toContain('at 3000 m TVDSS');
+    expect(res.body.name).toMatch(/^Pore-pressure EMW at 3,000 m TVDSS — ordinary kriging/);
     const wells = res.body.wells as RunWell[];
     expect(wells.length).toBeGreaterThanOrEqual(5);
     for (const w of wells) {
@@ -188,7 +188,7 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
     const res = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ quantity: 'emw_at_depth', depthTvdssM: 9000, wells: { from: 'prospect', bufferKm: 30 } });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('depth_beyond_logs');
-    expect(res.body.error.message).toMatch(/^depthTvdssM: no well's pore-pressure curve reaches 9000 m TVDSS \(the deepest ends at \d+ m TVDSS in .+\); choose a shallower depth\.$/);
+    expect(res.body.error.message).toMatch(/^depthTvdssM: no well's pore-pressure curve reaches 9,000 m TVDSS \(the deepest ends at [\d,]+ m TVDSS in .+\); choose a shallower depth\.$/);
     const missing = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ quantity: 'overpressure_at_depth' });
     expect(missing.status).toBe(400);
     expect(missing.body.error.message).toContain('depthTvdssM: is required for overpressure_at_depth');

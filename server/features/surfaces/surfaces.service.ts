@@ -98,11 +98,11 @@ async function atDepthPoints(db: Db, rows: Candidate[], params: Params, progress
 
 /**
  * A depth in the unit it was entered in, rounded to what was typed (10,000 ft, not 3048 m).
- * @example depthText(3048, 'ft') // '10000 ft'
+ * @example depthText(3048, 'ft') // '10,000 ft'
  */
 export function depthText(depthM: number, unit: 'm' | 'ft' = 'm', digits = 1): string {
   const shown = unit === 'ft' ? depthM / FT_M : depthM;
-  return `${Number(shown.toFixed(digits))} ${unit}`;
+  return `${shown.toLocaleString('en-US', { maximumFractionDigits: digits })} ${unit}`;
 }
 
 /** Gathers the wells, computes off the main thread, and stores the run. */
@@ -115,7 +115,9 @@ export async function createSurface(db: Db, teamId: string, userId: string, pros
   progress('saving', 0, 1);
   const method = params.method.kind === 'kriging' ? `ordinary kriging (${result.variogram?.model.model})` : `inverse distance (power ${params.method.power})`;
   const at = params.depthTvdssM !== undefined && AT_DEPTH_QUANTITIES.includes(params.quantity) ? ` at ${depthText(params.depthTvdssM, params.depthUnit)} TVDSS` : '';
-  const name = params.name ?? `${SURFACE_QUANTITY_LABELS[params.quantity]}${at} — ${method}`;
+  // "EMW at a depth" + " at 3,000 m TVDSS" would say "at" twice: the depth replaces the words.
+  const label = at ? SURFACE_QUANTITY_LABELS[params.quantity].replace(/ at a depth$/, '') : SURFACE_QUANTITY_LABELS[params.quantity];
+  const name = params.name ?? `${label}${at} — ${method}`;
   const { grid, ...rest } = result;
   const [row] = await db
     .insert(surfaces)

@@ -233,9 +233,9 @@ describe('kriging neighbourhood', () => {
 });
 
 describe('run names in the unit the depth was entered in', () => {
-  it('gives 10,000 ft back as 10000 ft, not 3048 m (international foot, 0.3048 m exactly, NIST SP 811 B.9)', async () => {
+  it('gives 10,000 ft back as 10,000 ft, not 3048 m (international foot, 0.3048 m exactly, NIST SP 811 B.9)', async () => {
     const { depthText } = await import('../../../server/features/surfaces/surfaces.service');
-    expect(depthText(3048, 'ft')).toBe('10000 ft');
-    expect(depthText(3000)).toBe('3000 m');
+    expect(depthText(3048, 'ft')).toBe('10,000 ft');
+    expect(depthText(3000)).toBe('3,000 m');
   });
 });
