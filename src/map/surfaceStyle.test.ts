@@ -1,7 +1,7 @@
 import { validateStyleMin, type StyleSpecification } from '@maplibre/maplibre-gl-style-spec';
 import { describe, expect, it } from 'vitest';
 import type { Surface } from '@shared/schemas/surfaces';
-import { SURFACE_LAYERS, contourFeatures, imageCoordinates, residualLimit, surfaceStyle, wellFeatures } from './surfaceStyle';
+import { SURFACE_LAYERS, SURFACE_SOURCES, contourFeatures, imageCoordinates, plannedFeatures, residualLimit, surfaceStyle, wellFeatures } from './surfaceStyle';
 
 const base: StyleSpecification = {
   version: 8,
@@ -67,7 +67,15 @@ describe('surfaceStyle', () => {
     contours: contourFeatures(contours, (m) => `${m} m`),
     outline: { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] },
     wells: wellFeatures([{ wellId: '00000000-0000-4000-8000-000000000000', name: 'AV-1', lon: 0.5, lat: 0.5, value: 2400, interpretationVersion: 1, residual: 12, predicted: 2412 }]),
+    planned: plannedFeatures([{ name: 'AV-9 (planned)', location: { type: 'Point', coordinates: [0.4, 0.6] } }]),
     residualLimitM: 50,
+  });
+
+  it('marks the planned wells above the control wells, labelled', () => {
+    const ids = style.layers.map((l) => l.id);
+    expect(ids.indexOf(SURFACE_LAYERS.planned)).toBeGreaterThan(ids.indexOf(SURFACE_LAYERS.wells));
+    const source = style.sources[SURFACE_SOURCES.planned] as unknown as { data: { features: { properties: { name: string } }[] } };
+    expect(source.data.features.map((f) => f.properties.name)).toEqual(['AV-9 (planned)']);
   });
 
   it('is a valid MapLibre style (checked by the style-spec validator)', () => {

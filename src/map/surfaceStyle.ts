@@ -6,7 +6,7 @@ import { LABEL_FONT, LABEL_FONT_STRONG } from './atlasLayers';
 import { RESIDUAL_RAMP } from '@/plots/surfaceRamp';
 
 /** Source and layer ids of the surface screen, bottom to top. The browser test queries them. */
-export const SURFACE_SOURCES = { raster: 'surface-raster', contours: 'surface-contours', outline: 'surface-prospect', wells: 'surface-wells' } as const;
+export const SURFACE_SOURCES = { raster: 'surface-raster', contours: 'surface-contours', outline: 'surface-prospect', wells: 'surface-wells', planned: 'surface-planned' } as const;
 export const SURFACE_LAYERS = {
   raster: 'surface-raster',
   contourLines: 'surface-contour-lines',
@@ -14,6 +14,8 @@ export const SURFACE_LAYERS = {
   outline: 'surface-prospect-line',
   wells: 'surface-wells',
   wellLabels: 'surface-well-labels',
+  planned: 'surface-planned',
+  plannedLabels: 'surface-planned-labels',
 } as const;
 
 type LonLat = [number, number];
@@ -53,6 +55,14 @@ export function wellFeatures(wells: Surface['wells']): FeatureCollection<Point, 
 }
 
 /**
+ * The prospect's planned wells as points, so the map shows where the values in the planned-well table are read.
+ * @example plannedFeatures([{ name: 'Ostrel Ridge-1 (planned)', location: { type: 'Point', coordinates: [-101.3, -32.6] } }]).features.length // 1
+ */
+export function plannedFeatures(planned: readonly { name: string; location: Point }[]): FeatureCollection<Point, { name: string }> {
+  return { type: 'FeatureCollection', features: planned.map((w) => ({ type: 'Feature', geometry: w.location, properties: { name: w.name } })) };
+}
+
+/**
  * The residual scale's half-width: the 90th percentile of the absolute residuals, so one outlier well does not
  * wash out all the others (wells beyond it get the end colour), rounded up to half a power of ten for the
  * legend (never 0, so the colour scale keeps a span).
@@ -79,6 +89,8 @@ export interface SurfaceStyleInput {
   contours: FeatureCollection<MultiPolygon> | null;
   outline: Polygon | null;
   wells: FeatureCollection<Point> | null;
+  /** The prospect's planned wells; absent or null draws none. */
+  planned?: FeatureCollection<Point> | null;
   residualLimitM: number;
 }
 
@@ -98,6 +110,7 @@ export function surfaceStyle(input: SurfaceStyleInput): StyleSpecification {
     [SURFACE_SOURCES.contours]: { type: 'geojson', data: input.contours ?? EMPTY },
     [SURFACE_SOURCES.outline]: { type: 'geojson', data: input.outline ? { type: 'Feature', geometry: input.outline, properties: {} } : EMPTY },
     [SURFACE_SOURCES.wells]: { type: 'geojson', data: input.wells ?? EMPTY },
+    [SURFACE_SOURCES.planned]: { type: 'geojson', data: input.planned ?? EMPTY },
   };
   const layers: LayerSpecification[] = [];
   if (input.raster) {
@@ -134,6 +147,20 @@ export function surfaceStyle(input: SurfaceStyleInput): StyleSpecification {
       minzoom: 8,
       layout: { 'text-field': ['get', 'name'], 'text-font': [LABEL_FONT_STRONG], 'text-size': 11, 'text-offset': [0, 1.1], 'text-anchor': 'top', 'text-optional': true },
       paint: { 'text-color': ink.text, 'text-halo-color': ink.halo, 'text-halo-width': 1.6 },
+    },
+    // Planned wells as a ring with a dot in the outline's colour, as on the Atlas, always labelled.
+    {
+      id: SURFACE_LAYERS.planned,
+      type: 'circle',
+      source: SURFACE_SOURCES.planned,
+      paint: { 'circle-radius': 7, 'circle-color': ink.halo, 'circle-stroke-color': ink.outline, 'circle-stroke-width': 2.5 },
+    },
+    {
+      id: SURFACE_LAYERS.plannedLabels,
+      type: 'symbol',
+      source: SURFACE_SOURCES.planned,
+      layout: { 'text-field': ['get', 'name'], 'text-font': [LABEL_FONT_STRONG], 'text-size': 11.5, 'text-offset': [0, 1.2], 'text-anchor': 'top' },
+      paint: { 'text-color': ink.outline, 'text-halo-color': ink.halo, 'text-halo-width': 1.8 },
     },
   );
   return { ...rest, sources, layers: [...input.base.layers, ...layers] };
