@@ -38,12 +38,15 @@ const existingAccountPassword = (email: string) =>
 /** The user with every team membership, as the API returns it. */
 export async function loadSession(db: Db, userId: string): Promise<Session | null> {
   const [user] = await db.select({ id: users.id, email: users.email, name: users.name }).from(users).where(eq(users.id, userId));
-  if (!user) return null;
+  return user ? withMemberships(db, user) : null;
+}
+
+async function withMemberships(db: Db, user: Session['user']): Promise<Session> {
   const rows = await db
     .select({ teamId: memberships.teamId, teamName: teams.name, role: memberships.role })
     .from(memberships)
     .innerJoin(teams, eq(teams.id, memberships.teamId))
-    .where(eq(memberships.userId, userId))
+    .where(eq(memberships.userId, user.id))
     .orderBy(teams.name);
   return { user, memberships: rows };
 }
@@ -60,15 +63,19 @@ export async function startSession(db: Db, userId: string): Promise<SessionGrant
  * or issued before the user's last password reset (an older version), or the user is gone.
  */
 export async function loadActiveSession(db: Db, claims: SessionClaims): Promise<Session | null> {
-  const [state] = await db
+  // One read of the user row serves both the session check and the session itself (this runs on every request).
+  const [row] = await db
     .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
       version: users.sessionVersion,
       revoked: sql<boolean>`exists (select 1 from ${revokedSessions} where ${revokedSessions.sessionId} = ${claims.sessionId})`,
     })
     .from(users)
     .where(eq(users.id, claims.userId));
-  if (!state || state.revoked || state.version !== claims.sessionVersion) return null;
-  return loadSession(db, claims.userId);
+  if (!row || row.revoked || row.version !== claims.sessionVersion) return null;
+  return withMemberships(db, { id: row.id, email: row.email, name: row.name });
 }
 
 /**
