@@ -5,6 +5,9 @@ import type { Membership } from '@shared/schemas/auth';
 import { readStored, STORAGE_KEYS, writeStored } from '@/utils/storage';
 import { useSessionStore } from './session';
 
+/** The seeded demo team (server/db/seed/demoAccounts.ts, DEMO_TEAM): wherever it is current, its data is called synthetic. */
+export const DEMO_TEAM_NAME = 'Synthetic demo';
+
 /**
  * The team the user is working in. The choice is remembered across visits; when the remembered
  * team is no longer among the memberships, the first membership is used instead.
@@ -24,6 +27,7 @@ export const useTeamStore = defineStore('team', () => {
   const currentTeamId = computed<string | null>(() => currentMembership.value?.teamId ?? null);
   const currentTeamName = computed<string | null>(() => currentMembership.value?.teamName ?? null);
   const currentRole = computed<Role | null>(() => currentMembership.value?.role ?? null);
+  const isDemoTeam = computed(() => currentTeamName.value === DEMO_TEAM_NAME);
 
   /** Throws for a team the user is not a member of, so a bad id never becomes the silent current team. */
   function switchTeam(teamId: string): void {
@@ -34,5 +38,5 @@ export const useTeamStore = defineStore('team', () => {
     writeStored(STORAGE_KEYS.teamId, teamId);
   }
 
-  return { selectedTeamId, currentMembership, currentTeamId, currentTeamName, currentRole, switchTeam };
+  return { selectedTeamId, currentMembership, currentTeamId, currentTeamName, currentRole, isDemoTeam, switchTeam };
 });

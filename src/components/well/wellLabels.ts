@@ -2,8 +2,7 @@ import type { CurveRole, PressureQuality, WellStatus } from '@shared/schemas/wel
 
 type TagType = 'default' | 'info' | 'success' | 'warning' | 'error';
 
-/** Name of the team the server seeds with the invented basin (server/db/seed/demoAccounts.ts). */
-export const DEMO_TEAM_NAME = 'Synthetic demo';
+export { DEMO_TEAM_NAME } from '@/stores/team';
 
 export const WELL_STATUS_LABELS: Record<WellStatus, string> = {
   planned: 'Planned',
