@@ -40,6 +40,18 @@ export const EATON_DEFAULT_EXPONENT = { sonic: 3, resistivity: 1.2 } as const;
  */
 export const BOWERS_STARTING = { v0: 5000, A: 4.4561, B: 0.8168, U: 3.13 } as const;
 
+/**
+ * The starting settings of a pore-pressure method: Eaton's published exponent, or Bowers' generic coefficients
+ * without unloading; the log smoothing carries over from the settings being replaced, else the default.
+ * @example startingPore('eaton-resistivity'); // { method: 'eaton-resistivity', exponent: 1.2, smoothingM: 20 }
+ */
+export function startingPore(method: PoreSettings['method'], previous?: { smoothingM?: number } | null): PoreSettings & { smoothingM: number } {
+  const smoothingM = previous?.smoothingM ?? DEFAULT_SMOOTHING_M;
+  if (method === 'eaton-sonic') return { method, exponent: EATON_DEFAULT_EXPONENT.sonic, smoothingM };
+  if (method === 'eaton-resistivity') return { method, exponent: EATON_DEFAULT_EXPONENT.resistivity, smoothingM };
+  return { method, v0: BOWERS_STARTING.v0, A: BOWERS_STARTING.A, B: BOWERS_STARTING.B, unloading: null, smoothingM };
+}
+
 /** Poisson's ratio is kept below 0.5 (incompressible), where Eaton's ν/(1 − ν) would blow up. */
 const POISSON_MAX = 0.499;
 

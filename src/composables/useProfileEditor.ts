@@ -1,6 +1,6 @@
 import { computed, ref, watch, type Ref } from 'vue';
 import type { Interpretation, InterpretationContent } from '@shared/schemas/interpretations';
-import { DEFAULT_SMOOTHING_M, EATON_DEFAULT_EXPONENT, PROFILE_DEFAULTS, type TopSettings } from '@shared/profile';
+import { PROFILE_DEFAULTS, startingPore, type TopSettings } from '@shared/profile';
 import * as profileApi from '@/api/profile';
 import { ApiClientError } from '@/api/client';
 
@@ -14,7 +14,7 @@ export function defaultContent(): InterpretationContent {
   return {
     normalDensityKgM3: PROFILE_DEFAULTS.normalDensityKgM3,
     trend: null,
-    pore: { method: 'eaton-sonic', exponent: EATON_DEFAULT_EXPONENT.sonic, smoothingM: DEFAULT_SMOOTHING_M },
+    pore: startingPore('eaton-sonic'),
     fracture: { method: 'eaton', poissonTop: 0.3, poissonGradientPerKm: 0.04 },
     top: null,
   };

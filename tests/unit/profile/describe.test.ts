@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { describeInterpretation } from '@shared/profile';
+import { describeInterpretation, startingPore } from '@shared/profile';
 
 describe('describeInterpretation', () => {
   it('writes every setting needed to reproduce the curves', () => {
@@ -30,5 +30,14 @@ describe('describeInterpretation', () => {
     expect(facts['Pore pressure']).toBe('Bowers (1995), V0 5000 ft/s, A 4.456, B 0.8168 (V in ft/s, σ in psi), unloading from 3500 m/s with U 3.13; log as recorded');
     expect(facts['Fracture pressure']).toBe('Matthews & Kelly (1967), Ki 0.7');
     expect(facts['Top of overpressure']).toBe('not picked');
+  });
+});
+
+describe('startingPore', () => {
+  it("starts Eaton at the published exponents and keeps the smoothing of the settings it replaces", () => {
+    // Eaton 1975, SPE 5544: exponent 3 on sonic, 1.2 on resistivity; 20 m smoothing is common practice, no source.
+    expect(startingPore('eaton-sonic')).toEqual({ method: 'eaton-sonic', exponent: 3, smoothingM: 20 });
+    expect(startingPore('eaton-resistivity', { smoothingM: 35 })).toEqual({ method: 'eaton-resistivity', exponent: 1.2, smoothingM: 35 });
+    expect(startingPore('bowers', null)).toMatchObject({ method: 'bowers', unloading: null, smoothingM: 20 });
   });
 });
