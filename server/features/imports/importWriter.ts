@@ -87,7 +87,8 @@ export async function writeWells(tx: Tx, teamId: string, userId: string, uploadI
   );
   progress('updating wells', toUpdate.length, toUpdate.length);
   // A new TD on a surveyed well with no TD TVD gets one from the survey (new wells have no survey yet).
-  await fillTdTvdFromSurvey(tx, toUpdate.filter((r) => r.tdMdM !== null && r.tdTvdM === null).map((r) => r.existingId!));
+  // Its own WHERE keeps to wells with a TD (MD) and no TD TVD.
+  await fillTdTvdFromSurvey(tx, toUpdate.map((r) => r.existingId!));
   return { created: toInsert.length, updated: toUpdate.length };
 }
 

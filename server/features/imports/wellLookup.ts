@@ -2,6 +2,8 @@ import { eq, inArray } from 'drizzle-orm';
 import type { StationInput, SurveySource } from '../../../shared/trajectory';
 import { tvdAt } from '../../../shared/trajectory';
 import type { Db } from '../../db/client';
+
+type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 import { surveyStations, wells } from '../../db/schema';
 
 export interface KnownWell {
@@ -33,7 +35,7 @@ export class WellLookup {
 }
 
 /** Survey stations of the given wells, for TVD from MD (a well without a survey is vertical). */
-export async function loadSurveys(db: Db, wellIds: string[]): Promise<Map<string, StationInput[]>> {
+export async function loadSurveys(db: Db | Tx, wellIds: string[]): Promise<Map<string, StationInput[]>> {
   const out = new Map<string, StationInput[]>();
   if (wellIds.length === 0) return out;
   const rows = await db

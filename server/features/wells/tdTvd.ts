@@ -1,7 +1,9 @@
-import { and, eq, inArray, isNotNull, isNull } from 'drizzle-orm';
+import { and, inArray, isNotNull, isNull } from 'drizzle-orm';
 import { tvdAt } from '../../../shared/trajectory';
 import type { Db } from '../../db/client';
-import { surveyStations, wells } from '../../db/schema';
+import { wells } from '../../db/schema';
+import { bulkUpdate } from '../../lib/bulkInsert';
+import { loadSurveys } from '../imports/wellLookup';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
@@ -19,23 +21,11 @@ export async function fillTdTvdFromSurvey(db: Db | Tx, wellIds: string[]): Promi
     .from(wells)
     .where(and(inArray(wells.id, wellIds), isNull(wells.tdTvdM), isNotNull(wells.tdMdM)));
   if (targets.length === 0) return 0;
-  const rows = await db
-    .select({ wellId: surveyStations.wellId, mdM: surveyStations.mdM, incDeg: surveyStations.incDeg, aziDeg: surveyStations.aziDeg })
-    .from(surveyStations)
-    .where(inArray(surveyStations.wellId, targets.map((t) => t.id)))
-    .orderBy(surveyStations.wellId, surveyStations.seq);
-  const byWell = new Map<string, { mdM: number; incDeg: number; aziDeg: number }[]>();
-  for (const r of rows) {
-    const list = byWell.get(r.wellId) ?? [];
-    list.push({ mdM: r.mdM, incDeg: r.incDeg, aziDeg: r.aziDeg });
-    byWell.set(r.wellId, list);
-  }
-  let filled = 0;
-  for (const t of targets) {
-    const stations = byWell.get(t.id);
-    if (!stations?.length || t.tdMdM === null) continue;
-    await db.update(wells).set({ tdTvdM: tvdAt(stations, t.tdMdM) }).where(eq(wells.id, t.id));
-    filled++;
-  }
-  return filled;
+  const surveys = await loadSurveys(db, targets.map((t) => t.id));
+  const updates = targets.flatMap((t) => {
+    const stations = surveys.get(t.id);
+    return stations?.length && t.tdMdM !== null ? [[t.id, tvdAt(stations, t.tdMdM)] as const] : [];
+  });
+  if (updates.length > 0) await bulkUpdate(db, 'wells', ['id', 'uuid'], [['td_tvd_m', 'float8']], updates);
+  return updates.length;
 }
