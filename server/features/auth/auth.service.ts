@@ -19,13 +19,14 @@ const DUMMY_HASH = bcrypt.hashSync('porelith-no-such-user', BCRYPT_ROUNDS);
 const invalidCredentials = () => new HttpError(401, 'invalid_credentials', 'The e-mail or password is not right.');
 const invalidToken = () =>
   badRequest('invalid_token', 'This link is not valid any more: it was used already, has expired, or was mistyped.');
-// Same code as any dead link (the client treats them alike), but the message says what to do next.
-const expiredInvitation = () =>
-  badRequest('invalid_token', `This invitation link has expired (links last ${INVITE_DAYS} days); ask your team admin to invite you again.`, {
+// Same code as any dead link (the client treats them alike), but the message says what to do next. A submit
+// with the link is a 400; opening it (nothing sent yet) is a 410, like a used link.
+const expiredInvitation = (status: 400 | 410 = 400) =>
+  new HttpError(status, 'invalid_token', `This invitation link has expired (links last ${INVITE_DAYS} days); ask your team admin to invite you again.`, {
     reason: 'expired',
   });
-const expiredReset = () =>
-  badRequest('invalid_token', `This password-reset link has expired (links last ${RESET_MINUTES} minutes); ask for a new one from the sign-in page.`, {
+const expiredReset = (status: 400 | 410 = 400) =>
+  new HttpError(status, 'invalid_token', `This password-reset link has expired (links last ${RESET_MINUTES} minutes); ask for a new one from the sign-in page.`, {
     reason: 'expired',
   });
 const existingAccountPassword = (email: string) =>
@@ -209,10 +210,7 @@ export async function inspectInvitation(db: Db, token: string): Promise<Invitati
     .where(eq(invitations.tokenHash, hashLinkToken(token)));
   if (!inv) throw unknownLink('invitation');
   if (inv.acceptedAt) throw usedLink('invitation');
-  if (inv.expiresAt.getTime() <= Date.now()) {
-    const e = expiredInvitation();
-    throw new HttpError(410, e.code, e.message, e.details);
-  }
+  if (inv.expiresAt.getTime() <= Date.now()) throw expiredInvitation(410);
   const [existing] = await db.select({ id: users.id }).from(users).where(eq(users.email, inv.email));
   return { email: inv.email, teamName: inv.teamName, existingAccount: Boolean(existing) };
 }
@@ -225,9 +223,6 @@ export async function inspectResetToken(db: Db, token: string): Promise<ResetChe
     .where(eq(passwordResets.tokenHash, hashLinkToken(token)));
   if (!reset) throw unknownLink('password-reset');
   if (reset.usedAt) throw usedLink('password-reset');
-  if (reset.expiresAt.getTime() <= Date.now()) {
-    const e = expiredReset();
-    throw new HttpError(410, e.code, e.message, e.details);
-  }
+  if (reset.expiresAt.getTime() <= Date.now()) throw expiredReset(410);
   return { expiresAt: reset.expiresAt.toISOString() };
 }
