@@ -7,8 +7,6 @@ const MIN_EDGE_RUN = 3;
 const LARGE = 999;
 
 interface Suspect {
-  /** A listed marker seen twice or more, rather than a run at an edge of the curve. */
-  known: boolean;
   count: number;
   columns: string[];
   firstLine: number;
@@ -37,14 +35,13 @@ export function checkNullSentinels(
 ): Set<number> {
   const markers = new Set(COMMON_NULL_MARKERS.filter((v) => v !== nullValue));
   const suspects = new Map<number, Suspect>();
-  const note = (value: number, count: number, column: string, line: number, known: boolean) => {
+  const note = (value: number, count: number, column: string, line: number) => {
     const s = suspects.get(value);
     if (!s) {
-      suspects.set(value, { count, columns: [column], firstLine: line, known });
+      suspects.set(value, { count, columns: [column], firstLine: line });
       return;
     }
     s.count += count;
-    s.known ||= known;
     if (!s.columns.includes(column)) s.columns.push(column);
     s.firstLine = Math.min(s.firstLine, line);
   };
@@ -61,16 +58,17 @@ export function checkNullSentinels(
         } else counts.set(v, { count: 1, firstLine: lineOfRow[i] });
       }
     }
-    for (const [v, c] of counts) if (c.count >= 2) note(v, c.count, mnemonics[k], c.firstLine, true);
+    for (const [v, c] of counts) if (c.count >= 2) note(v, c.count, mnemonics[k], c.firstLine);
     for (const run of edgeRuns(values, rowCount, markers)) {
       if (counts.has(run.value) || run.value === nullValue) continue;
-      note(run.value, run.length, mnemonics[k], lineOfRow[run.start], false);
+      note(run.value, run.length, mnemonics[k], lineOfRow[run.start]);
     }
   });
 
   const gaps = new Set<number>();
   for (const [value, s] of suspects) {
-    if (s.known && value < 0) {
+    // A listed marker (an edge run is never one: every marker in a curve is counted above, and skipped there).
+    if (markers.has(value) && value < 0) {
       gaps.add(value);
       errors.add(
         nullLine > 0 ? nullLine : s.firstLine,
