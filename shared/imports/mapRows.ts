@@ -16,12 +16,10 @@ export interface MappedRecord {
 
 export interface MappedRows {
   records: MappedRecord[];
-  /** Lines that had at least one problem (their records are not in `records`). */
-  invalidLines: number[];
   problems: Problem[];
   /**
-   * The records that had problems, with the fields that did read (the bad ones null), so later checks
-   * (coordinates, depths) can report every problem of a row at once instead of one round at a time.
+   * The records that had problems (their lines are the invalid ones), with the fields that did read (the bad ones
+   * null), so later checks (coordinates, depths) can report every problem of a row at once instead of one round at a time.
    */
   rejected: MappedRecord[];
   /** Field key → the CSV column it is read from, so later checks can name the column as the file does. */
@@ -117,11 +115,10 @@ export function mapCsvRows(csv: CsvFile, kind: CsvImportKind, mapping: ColumnMap
     }
   }
   const columnOfField = Object.fromEntries([...columnOf].map(([key, index]) => [key, csv.header[index]]));
-  if (problems.length) return { records: [], invalidLines: [], problems, rejected: [], columnOfField };
+  if (problems.length) return { records: [], problems, rejected: [], columnOfField };
 
   const records: MappedRecord[] = [];
   const rejected: MappedRecord[] = [];
-  const invalidLines: number[] = [];
   const format = { decimalComma: csv.decimalComma };
   for (const row of csv.rows) {
     const values: Record<string, CellValue> = {};
@@ -177,10 +174,7 @@ export function mapCsvRows(csv: CsvFile, kind: CsvImportKind, mapping: ColumnMap
       } else valueUnit = unitFor(fields.find((f) => f.key === 'value')!, units);
     }
     if (ok) records.push(valueUnit ? { line: row.line, values, valueUnit } : { line: row.line, values });
-    else {
-      invalidLines.push(row.line);
-      rejected.push({ line: row.line, values });
-    }
+    else rejected.push({ line: row.line, values });
   }
-  return { records, invalidLines, problems, rejected, columnOfField };
+  return { records, problems, rejected, columnOfField };
 }

@@ -95,7 +95,7 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
     if (!numeric.includes(key)) problems.push({ line: 1, column: key, message: `a unit was chosen for "${key}", which is not a numeric field of a ${kind} import (${numeric.join(', ')})` });
   }
   // Ragged records never reach the mapping, but they are skipped lines all the same.
-  const invalidLines = [...csv.raggedLines, ...mapped.invalidLines];
+  const invalidLines = [...csv.raggedLines, ...mapped.rejected.map((r) => r.line)];
   // The planners speak of fields ('x', 'md'); the user knows the columns by the file's own header.
   const inFileTerms = (list: Problem[]) => list.map((x) => (x.column && mapped.columnOfField[x.column] ? { ...x, column: mapped.columnOfField[x.column] } : x));
   const columns = csv.header.map((name) => ({ name, field: mapping[name] ?? null, ...(matches.find((m) => m.column === name)?.unit ? { unit: matches.find((m) => m.column === name)!.unit } : {}) }));
