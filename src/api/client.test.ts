@@ -1,6 +1,7 @@
 import { describe, expect, it, vi } from 'vitest';
 import { sessionSchema } from '@shared/schemas/auth';
-import { ApiClientError, createApiClient, describeApiError, toFieldIssues } from './client';
+import { z } from 'zod';
+import { ApiClientError, createApiClient, describeApiError, onSessionExpired as registerExpiry, postMultipart, toFieldIssues } from './client';
 import { signIn } from './auth';
 import { inviteMember, listOutbox } from './teams';
 
@@ -126,6 +127,20 @@ describe('session expiry', () => {
     const client = createApiClient({ fetchImpl: fakeFetch(reply401('unauthenticated', 'Your session has ended.')), onSessionExpired });
     await expect(client.get('/api/teams/t1/members')).rejects.toMatchObject({ status: 401 });
     expect(onSessionExpired).toHaveBeenCalledOnce();
+  });
+
+  it('reports a 401 from a file upload to the app-wide handler once, without a second request', async () => {
+    const handler = vi.fn();
+    registerExpiry(handler);
+    const fetchImpl = fakeFetch(reply401('unauthenticated', 'Your session has ended.'));
+    try {
+      const err = await rejection(postMultipart('/api/teams/t1/layers', new FormData(), { schema: z.object({}), bareFailure: () => 'x', fetchImpl }));
+      expect(err.status).toBe(401);
+      expect(handler).toHaveBeenCalledOnce();
+      expect(fetchImpl).toHaveBeenCalledOnce();
+    } finally {
+      registerExpiry(null);
+    }
   });
 
   it('leaves 401 from auth endpoints (wrong password, not signed in) to the caller', async () => {

@@ -81,6 +81,15 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
+/** The reply checked against its contract; a mismatch names the first field that did not fit. */
+function checkedReply<T>(status: number, schema: ZodType<T>, data: unknown): T {
+  const checked = schema.safeParse(data);
+  if (checked.success) return checked.data;
+  const first = checked.error.issues[0];
+  const where = first && first.path.length > 0 ? `${first.path.join('.')}: ` : '';
+  throw new ApiClientError(status, 'unexpected_reply', `The server sent a reply this page does not understand (${where}${first?.message ?? 'invalid'}).`);
+}
+
 async function errorFromResponse(response: Response): Promise<ApiClientError> {
   const parsed = apiErrorSchema.safeParse(await readJson(response));
   if (!parsed.success) {
@@ -153,18 +162,7 @@ export function createApiClient(options: ApiClientOptions = {}): ApiClient {
     if (response.status === 204) return undefined as T;
 
     const data = await readJson(response);
-    if (!opts.schema) return data as T;
-    const checked = opts.schema.safeParse(data);
-    if (!checked.success) {
-      const first = checked.error.issues[0];
-      const where = first && first.path.length > 0 ? `${first.path.join('.')}: ` : '';
-      throw new ApiClientError(
-        response.status,
-        'unexpected_reply',
-        `The server sent a reply this page does not understand (${where}${first?.message ?? 'invalid'}).`,
-      );
-    }
-    return checked.data;
+    return opts.schema ? checkedReply(response.status, opts.schema, data) : (data as T);
   }
 
   return {
@@ -202,8 +200,7 @@ export interface MultipartOptions<T> {
 
 /**
  * A multipart POST (a file upload). The JSON client cannot carry a file, so this calls fetch itself, with the
- * same cookie rule, the same error shape and the same "session ended" handling (a 401 is passed through a cheap
- * GET of the same path, which lets the shared client redirect to sign-in).
+ * same cookie rule, the same error shape and the same "session ended" handling.
  * @example const layer = await postMultipart(`/api/teams/${teamId}/layers`, form, { schema: referenceLayerSchema, bareFailure });
  */
 export async function postMultipart<T>(url: string, form: FormData, o: MultipartOptions<T>): Promise<T> {
@@ -212,28 +209,20 @@ export async function postMultipart<T>(url: string, form: FormData, o: Multipart
   try {
     response = await fetchImpl(url, { method: 'POST', body: form, credentials: 'same-origin', headers: { Accept: 'application/json' } });
   } catch {
-    throw new ApiClientError(NETWORK_FAILURE_STATUS, 'network_error', 'Cannot reach the Porelith server. Check your connection and try again.');
+    throw new ApiClientError(NETWORK_FAILURE_STATUS, 'network_error', NETWORK_MESSAGE);
   }
-  const text = await response.text();
-  let body: unknown;
-  try {
-    body = text ? JSON.parse(text) : undefined;
-  } catch {
-    body = undefined;
-  }
+  const body = await readJson(response);
   if (!response.ok) {
-    if (response.status === 401) void api.get(url).catch(() => undefined);
     const parsed = apiErrorSchema.safeParse(body);
-    if (!parsed.success) throw new ApiClientError(response.status, `http_${response.status}`, o.bareFailure(response.status));
-    const { code, message, details } = parsed.data.error;
-    if (o.toError) throw o.toError(response.status, code, message, details);
-    const issues = toFieldIssues(details);
-    throw new ApiClientError(response.status, code, describeApiError(message, issues), issues);
+    let error: Error;
+    if (!parsed.success) error = new ApiClientError(response.status, `http_${response.status}`, o.bareFailure(response.status));
+    else {
+      const { code, message, details } = parsed.data.error;
+      const issues = toFieldIssues(details);
+      error = o.toError ? o.toError(response.status, code, message, details) : new ApiClientError(response.status, code, describeApiError(message, issues), issues);
+    }
+    if (response.status === 401 && error instanceof ApiClientError) sessionExpiredHandler?.(error);
+    throw error;
   }
-  const checked = o.schema.safeParse(body);
-  if (!checked.success) {
-    const first = checked.error.issues[0];
-    throw new ApiClientError(response.status, 'unexpected_reply', `The server sent a reply this page does not understand (${first?.path.join('.') ?? ''}: ${first?.message ?? 'invalid'}).`);
-  }
-  return checked.data;
+  return checkedReply(response.status, o.schema, body);
 }
