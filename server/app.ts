@@ -67,7 +67,12 @@ export function createApp({ db, env, mailer, logger, serveClient = true, tileCac
       crossOriginEmbedderPolicy: false,
     }),
   );
-  app.use(pinoHttp({ logger: logger ?? createLogger(env.LOG_LEVEL), autoLogging: { ignore: (req) => req.url === '/api/health' || (req.url ?? '').startsWith('/tiles/') } }));
+  app.use(
+    pinoHttp({
+      logger: logger ?? createLogger(env.LOG_LEVEL),
+      autoLogging: { ignore: (req) => req.url === '/api/health' || (req.url ?? '').startsWith('/tiles/') },
+    }),
+  );
   app.use(express.json({ limit: JSON_LIMIT }));
   app.use(cookieParser());
   app.use('/api', sessionMiddleware(db, env));
@@ -75,7 +80,18 @@ export function createApp({ db, env, mailer, logger, serveClient = true, tileCac
   app.use('/api/health', healthRouter(db));
   app.use('/api/auth', authRouter(db, env, mailer));
   const changes = new TeamChanges();
-  app.use('/api/teams', requireSession, teamsRouter(db, env, mailer), wellsRouter(db, changes), importsRouter(db, changes), planningRouter(db, changes), layersRouter(db, changes), interpretationsRouter(db, changes), surfacesRouter(db), teamTilesRouter(db, changes, { cache: tileCache }));
+  app.use(
+    '/api/teams',
+    requireSession,
+    teamsRouter(db, env, mailer),
+    wellsRouter(db, changes),
+    importsRouter(db, changes),
+    planningRouter(db, changes),
+    layersRouter(db, changes),
+    interpretationsRouter(db, changes),
+    surfacesRouter(db),
+    teamTilesRouter(db, changes, { cache: tileCache }),
+  );
   app.use('/api', notFoundApi);
   app.use('/tiles', basemapRouter());
 

@@ -8,7 +8,12 @@ const envSchema = z.object({
   DATABASE_URL: z.string().url('must be a postgres:// URL'),
   APP_URL: z.string().url().optional(),
   JWT_SECRET: z.string().min(32, 'must be at least 32 characters'),
-  SESSION_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(30),
+  SESSION_MINUTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 60)
+    .default(30),
   SIGNIN_RATE_MAX: z.coerce.number().int().min(1).default(10),
   SIGNIN_RATE_WINDOW_MIN: z.coerce.number().int().min(1).default(15),
   SMTP_HOST: z.string().default('127.0.0.1'),

@@ -56,7 +56,13 @@ export function cutTiles(countryLabels: LabelCollection, seaLabels: LabelCollect
       if (!any) return; // nothing here, so nothing in the children either
       if (Object.keys(found).length > 0) out.push({ z, x, y, data: fromGeojsonVt(found, { version: 2, extent: EXTENT }) });
       if (z < band.maxZoom) {
-        for (const [dx, dy] of [[0, 0], [1, 0], [0, 1], [1, 1]]) visit(z + 1, 2 * x + dx, 2 * y + dy);
+        for (const [dx, dy] of [
+          [0, 0],
+          [1, 0],
+          [0, 1],
+          [1, 1],
+        ])
+          visit(z + 1, 2 * x + dx, 2 * y + dy);
       }
     };
     const n = 2 ** band.minZoom;

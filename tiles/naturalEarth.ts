@@ -101,7 +101,8 @@ export function countryLabels(): FeatureCollection<Point, CountryLabelProps> {
   for (const scale of ['50m', '10m'] as const) {
     const t = topology(scale);
     for (const f of feature(t, t.objects.countries).features) {
-      if (!byName.has(f.properties.name) && f.geometry) byName.set(f.properties.name, f as Feature<Polygon | MultiPolygon, { name: string }>);
+      if (!byName.has(f.properties.name) && f.geometry)
+        byName.set(f.properties.name, f as Feature<Polygon | MultiPolygon, { name: string }>);
     }
   }
   const rows = [...byName.values()].flatMap((f) => {

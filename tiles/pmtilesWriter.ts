@@ -87,7 +87,9 @@ export function writePmtiles(tiles: readonly TileInput[], options: PmtilesOption
 
   const { root, leaves } = buildDirectories(entries, compress, options.leafSize);
   if (HEADER_BYTES + root.length > FIRST_READ_BYTES) {
-    throw new Error(`writePmtiles: the root directory is ${root.length} bytes and does not fit in the first 16 KiB; use a larger leafSize.`);
+    throw new Error(
+      `writePmtiles: the root directory is ${root.length} bytes and does not fit in the first 16 KiB; use a larger leafSize.`,
+    );
   }
   const metadata = compress(new TextEncoder().encode(JSON.stringify(options.metadata)));
 

@@ -125,7 +125,15 @@ export function basemapStyle(origin: string, opts: BasemapStyleOptions = {}): St
         layout: {
           'text-field': ['get', 'name'],
           'text-font': [BASEMAP_FONTS.italic.stack],
-          'text-size': ['interpolate', ['linear'], ['zoom'], 1, ['match', ['get', 'kind'], 'ocean', 11, 10], 6, ['match', ['get', 'kind'], 'ocean', 15, 13]],
+          'text-size': [
+            'interpolate',
+            ['linear'],
+            ['zoom'],
+            1,
+            ['match', ['get', 'kind'], 'ocean', 11, 10],
+            6,
+            ['match', ['get', 'kind'], 'ocean', 15, 13],
+          ],
           'text-letter-spacing': 0.12,
           'text-max-width': 6,
           'text-line-height': 1.3,
@@ -170,14 +178,26 @@ function graticule(): FeatureCollection<LineString, { major: boolean }> {
     features.push({
       type: 'Feature',
       properties: { major: lon % 30 === 0 },
-      geometry: { type: 'LineString', coordinates: [[lon, BASEMAP_BOUNDS[1]], [lon, BASEMAP_BOUNDS[3]]] },
+      geometry: {
+        type: 'LineString',
+        coordinates: [
+          [lon, BASEMAP_BOUNDS[1]],
+          [lon, BASEMAP_BOUNDS[3]],
+        ],
+      },
     });
   }
   for (let lat = -80; lat <= 80; lat += 10) {
     features.push({
       type: 'Feature',
       properties: { major: lat % 30 === 0 },
-      geometry: { type: 'LineString', coordinates: [[-180, lat], [180, lat]] },
+      geometry: {
+        type: 'LineString',
+        coordinates: [
+          [-180, lat],
+          [180, lat],
+        ],
+      },
     });
   }
   return { type: 'FeatureCollection', features };

@@ -6,7 +6,10 @@ import { loadEnvOrExit } from '../env';
 import { createDb } from './client';
 import { applyMigrations } from './migrate';
 
-const { values } = parseArgs({ options: { email: { type: 'string' }, name: { type: 'string' }, team: { type: 'string' } }, allowPositionals: false });
+const { values } = parseArgs({
+  options: { email: { type: 'string' }, name: { type: 'string' }, team: { type: 'string' } },
+  allowPositionals: false,
+});
 const parsed = firstAdminInput.safeParse(values);
 if (!parsed.success) {
   for (const issue of parsed.error.issues) console.error(`[porelith] --${issue.path.join('.')}: ${issue.message}`);

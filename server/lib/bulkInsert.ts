@@ -31,9 +31,14 @@ export async function bulkInsert(
       columns.map(([, type], c) => sql`${sql.param(arrays[c])}::${sql.raw(type)}[]`),
       sql`, `,
     );
-    const names = sql.join(columns.map(([name]) => sql.identifier(name)), sql`, `);
+    const names = sql.join(
+      columns.map(([name]) => sql.identifier(name)),
+      sql`, `,
+    );
     const aliases = sql.raw(columns.map((_, c) => `c${c}`).join(', '));
-    const values = sql.raw(columns.map(([, , expression], c) => (expression ? expression.replaceAll('$value', `u.c${c}`) : `u.c${c}`)).join(', '));
+    const values = sql.raw(
+      columns.map(([, , expression], c) => (expression ? expression.replaceAll('$value', `u.c${c}`) : `u.c${c}`)).join(', '),
+    );
     await tx.execute(sql`INSERT INTO ${sql.identifier(table)} (${names}) SELECT ${values} FROM unnest(${unnest}) AS u(${aliases})`);
     onChunk?.(Math.min(rows.length, start + ROWS_PER_STATEMENT), rows.length);
   }
@@ -51,12 +56,23 @@ export async function bulkUpdate(
     const chunk = rows.slice(start, start + ROWS_PER_STATEMENT);
     const all = [idColumn, ...columns] as const;
     const arrays = all.map((_, c) => chunk.map((r) => r[c] ?? null));
-    const unnest = sql.join(all.map(([, type], c) => sql`${sql.param(arrays[c])}::${sql.raw(type)}[]`), sql`, `);
-    const aliases = sql.join(all.map((_, c) => sql.raw(`c${c}`)), sql`, `);
-    const sets = sql.join(
-      columns.map(([name, , expression], i) => sql`${sql.identifier(name)} = ${sql.raw(expression ? expression.replaceAll('$value', `u.c${i + 1}`) : `u.c${i + 1}`)}`),
+    const unnest = sql.join(
+      all.map(([, type], c) => sql`${sql.param(arrays[c])}::${sql.raw(type)}[]`),
       sql`, `,
     );
-    await tx.execute(sql`UPDATE ${sql.identifier(table)} AS t SET ${sets} FROM unnest(${unnest}) AS u(${aliases}) WHERE t.${sql.identifier(idColumn[0])} = u.c0`);
+    const aliases = sql.join(
+      all.map((_, c) => sql.raw(`c${c}`)),
+      sql`, `,
+    );
+    const sets = sql.join(
+      columns.map(
+        ([name, , expression], i) =>
+          sql`${sql.identifier(name)} = ${sql.raw(expression ? expression.replaceAll('$value', `u.c${i + 1}`) : `u.c${i + 1}`)}`,
+      ),
+      sql`, `,
+    );
+    await tx.execute(
+      sql`UPDATE ${sql.identifier(table)} AS t SET ${sets} FROM unnest(${unnest}) AS u(${aliases}) WHERE t.${sql.identifier(idColumn[0])} = u.c0`,
+    );
   }
 }

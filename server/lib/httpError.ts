@@ -11,8 +11,7 @@ export class HttpError extends Error {
   }
 }
 
-export const badRequest = (code: string, message: string, details?: unknown) =>
-  new HttpError(400, code, message, details);
+export const badRequest = (code: string, message: string, details?: unknown) => new HttpError(400, code, message, details);
 export const unauthenticated = (message = 'Sign in to continue.') => new HttpError(401, 'unauthenticated', message);
 /** Deliberately vague: a non-member learns nothing about the team or the resource. */
 export const forbidden = () => new HttpError(403, 'forbidden', 'You do not have access to this.');

@@ -33,7 +33,12 @@ export class JobRegistry {
         Object.assign(job, {
           state: 'error',
           phase: 'failed',
-          error: { status: err.status ?? 500, code: err.code ?? 'internal', message: err.message ?? 'The work failed.', details: err.details },
+          error: {
+            status: err.status ?? 500,
+            code: err.code ?? 'internal',
+            message: err.message ?? 'The work failed.',
+            details: err.details,
+          },
         }),
     );
     return job;

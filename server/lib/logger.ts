@@ -5,13 +5,7 @@ export function createLogger(level: string): Logger {
   return pino({
     level,
     redact: {
-      paths: [
-        'req.headers.cookie',
-        'req.headers.authorization',
-        'res.headers["set-cookie"]',
-        '*.password',
-        '*.token',
-      ],
+      paths: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]', '*.password', '*.token'],
       censor: '[redacted]',
     },
   });

@@ -2,7 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { HttpError } from '../lib/httpError';
 
 export const notFoundApi: RequestHandler = (req, res) => {
-  res.status(404).json({ error: { code: 'not_found', message: `No API route for ${req.method} ${req.originalUrl.split("?")[0]}.` } });
+  res.status(404).json({ error: { code: 'not_found', message: `No API route for ${req.method} ${req.originalUrl.split('?')[0]}.` } });
 };
 
 /** One place turns every failure into `{ error: { code, message, details } }`. */

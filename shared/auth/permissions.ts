@@ -35,15 +35,7 @@ const GRANTS: Record<Role, readonly Action[] | 'all'> = {
     'hazards.edit',
     'layers.upload',
   ],
-  planner: [
-    'team.read',
-    'comment.write',
-    'prospects.edit',
-    'plannedWells.edit',
-    'offsets.edit',
-    'exports.create',
-    'hazards.edit',
-  ],
+  planner: ['team.read', 'comment.write', 'prospects.edit', 'plannedWells.edit', 'offsets.edit', 'exports.create', 'hazards.edit'],
   viewer: ['team.read', 'comment.write'],
 };
 

@@ -26,7 +26,9 @@ const lasText = writeLas({
 
 const csvLines = ['well,md_m,tvd_m,pressure_psi,emw_ppg,source,date,comment,quality'];
 for (let i = 0; i < CSV_ROWS; i++) {
-  csvLines.push(`KESTREL-3,${(1000 + i * 0.1).toFixed(1)},${(999 + i * 0.1).toFixed(2)},${(2000 + i * 0.01).toFixed(2)},8.5,RFT,2024-03-14,normal,good`);
+  csvLines.push(
+    `KESTREL-3,${(1000 + i * 0.1).toFixed(1)},${(999 + i * 0.1).toFixed(2)},${(2000 + i * 0.01).toFixed(2)},8.5,RFT,2024-03-14,normal,good`,
+  );
 }
 const csvText = csvLines.join('\n');
 
@@ -37,7 +39,8 @@ describe(`LAS 2.0, ${LAS_ROWS} data lines`, () => {
   bench('reference: split lines and Number() every token', () => {
     const lines = lasText.split('\n');
     let sum = 0;
-    for (let i = lines.findIndex((l) => l.startsWith('~A')) + 1; i < lines.length; i++) for (const t of lines[i].trim().split(/\s+/)) sum += Number(t);
+    for (let i = lines.findIndex((l) => l.startsWith('~A')) + 1; i < lines.length; i++)
+      for (const t of lines[i].trim().split(/\s+/)) sum += Number(t);
     if (sum === 0) throw new Error('nothing read');
   });
 });

@@ -56,9 +56,6 @@ export class ProblemList {
   finish(): Problem[] {
     const sorted = [...this.listed].sort((a, b) => a.line - b.line);
     if (this.unlisted === 0) return sorted;
-    return [
-      ...sorted,
-      { line: this.firstUnlistedLine, message: `${this.unlisted} more problems from this line on are not listed` },
-    ];
+    return [...sorted, { line: this.firstUnlistedLine, message: `${this.unlisted} more problems from this line on are not listed` }];
   }
 }

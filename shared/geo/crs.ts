@@ -51,7 +51,7 @@ export function outsideUtmZone(lon: number, lat: number, epsg: number): string |
   if (!north && !south) return null;
   const zone = epsg - (north ? 32600 : 32700);
   const centralLon = -183 + 6 * zone;
-  const offset = Math.abs((((lon - centralLon) % 360) + 540) % 360 - 180);
+  const offset = Math.abs(((((lon - centralLon) % 360) + 540) % 360) - 180);
   const meridian = `${Math.abs(centralLon)}°${centralLon < 0 ? 'W' : 'E'}`;
   if (offset > UTM_MAX_DEGREES_FROM_CENTRAL_MERIDIAN) {
     return `lies at lon ${lon.toFixed(3)}, ${offset.toFixed(1)}° from the zone ${zone} central meridian (${meridian})`;

@@ -46,7 +46,10 @@ function parseDate(cell: string): string | null {
 
 /** Enumerated text matched loosely ("Formation test" → formation_test, "LOT" → lot). */
 function matchEnum(cell: string, values: readonly string[]): string | null {
-  const key = cell.trim().toLowerCase().replace(/[\s-]+/g, '_');
+  const key = cell
+    .trim()
+    .toLowerCase()
+    .replace(/[\s-]+/g, '_');
   const exact = values.find((v) => v.toLowerCase() === key);
   if (exact) return exact;
   const synonyms: Record<string, string> = {
@@ -107,11 +110,16 @@ export function mapCsvRows(csv: CsvFile, kind: CsvImportKind, mapping: ColumnMap
     columnOf.set(fieldKey, index);
   }
   for (const f of fields) {
-    if (f.required && !columnOf.has(f.key)) problems.push({ line: 1, message: `no column is mapped to the required field "${f.label}" (${f.key})` });
+    if (f.required && !columnOf.has(f.key))
+      problems.push({ line: 1, message: `no column is mapped to the required field "${f.label}" (${f.key})` });
     const unit = unitFor(f, units);
     if (f.quantity && unit && !UNITS_FOR_QUANTITY[f.quantity].includes(unit)) {
       const index = columnOf.get(f.key);
-      problems.push({ line: 1, column: index === undefined ? f.key : csv.header[index], message: `unit "${unit}" is not one of ${UNITS_FOR_QUANTITY[f.quantity].join(', ')}` });
+      problems.push({
+        line: 1,
+        column: index === undefined ? f.key : csv.header[index],
+        message: `unit "${unit}" is not one of ${UNITS_FOR_QUANTITY[f.quantity].join(', ')}`,
+      });
     }
   }
   const columnOfField = Object.fromEntries([...columnOf].map(([key, index]) => [key, csv.header[index]]));
@@ -168,10 +176,18 @@ export function mapCsvRows(csv: CsvFile, kind: CsvImportKind, mapping: ColumnMap
       if (typeof perRow === 'string') {
         valueUnit = offered.find((u) => u.toLowerCase() === perRow.toLowerCase().replace(/\s+/g, ''));
         if (!valueUnit) {
-          problems.push({ line: row.line, column: csv.header[columnOf.get('valueUnit')!], message: `unit '${perRow}' is not one of ${offered.join(', ')}` });
+          problems.push({
+            line: row.line,
+            column: csv.header[columnOf.get('valueUnit')!],
+            message: `unit '${perRow}' is not one of ${offered.join(', ')}`,
+          });
           ok = false;
         }
-      } else valueUnit = unitFor(fields.find((f) => f.key === 'value')!, units);
+      } else
+        valueUnit = unitFor(
+          fields.find((f) => f.key === 'value')!,
+          units,
+        );
     }
     if (ok) records.push(valueUnit ? { line: row.line, values, valueUnit } : { line: row.line, values });
     else rejected.push({ line: row.line, values });

@@ -22,7 +22,8 @@ export interface ExperimentalVariogramOptions {
 export function experimentalVariogram(points: readonly DataPoint[], options: ExperimentalVariogramOptions): VariogramLag[] {
   const { lags, lagWidth } = options ?? ({} as ExperimentalVariogramOptions);
   if (!Number.isInteger(lags) || lags < 1) throw new Error(`lags must be an integer ≥ 1, got ${String(lags)}`);
-  if (typeof lagWidth !== 'number' || !Number.isFinite(lagWidth) || lagWidth <= 0) throw new Error(`lagWidth must be a finite number > 0, got ${String(lagWidth)}`);
+  if (typeof lagWidth !== 'number' || !Number.isFinite(lagWidth) || lagWidth <= 0)
+    throw new Error(`lagWidth must be a finite number > 0, got ${String(lagWidth)}`);
   const { xs, ys, values } = validatePoints(points, 2, 'An experimental variogram');
   const n = xs.length;
   const sumH = new Float64Array(lags);

@@ -59,7 +59,11 @@ function criterion(b: Bins, w: Float64Array, shape: Float64Array, nugget: number
 /** For a fixed range the model is linear in (nugget, sill): solve the weighted least squares exactly, with nugget, sill ≥ 0. */
 function fitLinear(b: Bins, w: Float64Array, shape: Float64Array, fixedNugget: number | undefined): { nugget: number; sill: number } {
   const n = shape.length;
-  let sw = 0, sg = 0, sgg = 0, sz = 0, sgz = 0;
+  let sw = 0,
+    sg = 0,
+    sgg = 0,
+    sz = 0,
+    sgz = 0;
   for (let j = 0; j < n; j++) {
     sw += w[j];
     sg += w[j] * shape[j];

@@ -20,7 +20,8 @@ export interface IdwEstimator {
  * validatePower(0); // throws "power must be a finite number > 0, got 0"
  */
 export function validatePower(power: number): void {
-  if (typeof power !== 'number' || !Number.isFinite(power) || power <= 0) throw new Error(`power must be a finite number > 0, got ${String(power)}`);
+  if (typeof power !== 'number' || !Number.isFinite(power) || power <= 0)
+    throw new Error(`power must be a finite number > 0, got ${String(power)}`);
 }
 
 /**
@@ -29,7 +30,13 @@ export function validatePower(power: number): void {
  * createIdwEstimator(new Float64Array([0, 10]), new Float64Array([0, 0]), new Float64Array([1, 3]), 2)
  *   .estimate(5, 0, -1); // 2
  */
-export function createIdwEstimator(xs: Float64Array, ys: Float64Array, values: Float64Array, power: number, maxNeighbours?: number): IdwEstimator {
+export function createIdwEstimator(
+  xs: Float64Array,
+  ys: Float64Array,
+  values: Float64Array,
+  power: number,
+  maxNeighbours?: number,
+): IdwEstimator {
   const n = xs.length;
   const halfPower = power / 2;
   // weights from squared distances: 1/d^p = (d²)^(−p/2), with p = 2 needing no pow at all

@@ -29,7 +29,8 @@ function distance(x1: number, y1: number, x2: number, y2: number): number {
 /** n² doubles: 2,048 points take 32 MB. */
 const PAIR_CACHE_MAX_POINTS = 2048;
 
-const SINGULAR = 'Kriging system is singular: check that the data points are distinct and the variogram is valid (a gaussian model usually needs a small nugget)';
+const SINGULAR =
+  'Kriging system is singular: check that the data points are distinct and the variogram is valid (a gaussian model usually needs a small nugget)';
 
 /** Round-off leaves about −1e-15·C(0) at a datum; a clearly negative value is reported as is. */
 function clampVariance(variance: number, c00: number): number {
@@ -44,7 +45,14 @@ function clampVariance(variance: number, c00: number): number {
  * const k = createKriger(xs, ys, values, { model: 'exponential', nugget: 0, sill: 1, range: 30 }, 16, false);
  * k.estimate(120, 340, -1).value;
  */
-export function createKriger(xs: Float64Array, ys: Float64Array, values: Float64Array, variogram: Variogram, maxNeighbours: number | undefined, wantWeights: boolean): Kriger {
+export function createKriger(
+  xs: Float64Array,
+  ys: Float64Array,
+  values: Float64Array,
+  variogram: Variogram,
+  maxNeighbours: number | undefined,
+  wantWeights: boolean,
+): Kriger {
   if (maxNeighbours === undefined || maxNeighbours >= xs.length) return createGlobalKriger(xs, ys, values, variogram, wantWeights);
   return createNeighbourKriger(xs, ys, values, variogram, maxNeighbours);
 }
@@ -85,7 +93,14 @@ function createGlobalKriger(xs: Float64Array, ys: Float64Array, values: Float64A
 
   const r = new Float64Array(s);
   r[n] = 1;
-  const out: KrigerOutput = { value: 0, variance: 0, lagrangeMultiplier: 0, count: n, ids: new Int32Array(n), weights: new Float64Array(n) };
+  const out: KrigerOutput = {
+    value: 0,
+    variance: 0,
+    lagrangeMultiplier: 0,
+    count: n,
+    ids: new Int32Array(n),
+    weights: new Float64Array(n),
+  };
   for (let i = 0; i < n; i++) out.ids[i] = i;
   return {
     estimate(x, y, exclude) {
@@ -134,7 +149,14 @@ function createNeighbourKriger(xs: Float64Array, ys: Float64Array, values: Float
   const rhs = new Float64Array(size);
   const c0 = new Float64Array(size);
   const d2 = new Float64Array(k);
-  const out: KrigerOutput = { value: 0, variance: 0, lagrangeMultiplier: 0, count: 0, ids: new Int32Array(k), weights: new Float64Array(k) };
+  const out: KrigerOutput = {
+    value: 0,
+    variance: 0,
+    lagrangeMultiplier: 0,
+    count: 0,
+    ids: new Int32Array(k),
+    weights: new Float64Array(k),
+  };
   const ids = out.ids;
   const pairCache = n <= PAIR_CACHE_MAX_POINTS ? new Float64Array(n * n).fill(NaN) : undefined;
 

@@ -6,8 +6,7 @@ import { validateMaxNeighbours, validatePoints } from './validate';
 import { covarianceFunction, validateVariogram } from './variogramModel';
 
 export type LeaveOneOutMethod =
-  | { kind: 'kriging'; variogram: Variogram; maxNeighbours?: number }
-  | { kind: 'idw'; power: number; maxNeighbours?: number };
+  { kind: 'kriging'; variogram: Variogram; maxNeighbours?: number } | { kind: 'idw'; power: number; maxNeighbours?: number };
 
 export interface LeaveOneOutResidual {
   index: number;
@@ -31,7 +30,12 @@ export interface LeaveOneOutResult {
  * 15(6), 687–699): with K the ordinary-kriging matrix and z̃ = [z; 0], observed − predicted = (K⁻¹z̃)ᵢ/(K⁻¹)ᵢᵢ and the
  * variance is 1/(K⁻¹)ᵢᵢ — O(n³) once instead of n separate solves.
  */
-function dubrule(xs: Float64Array, ys: Float64Array, values: Float64Array, variogram: Variogram): { predicted: Float64Array; variance: Float64Array } {
+function dubrule(
+  xs: Float64Array,
+  ys: Float64Array,
+  values: Float64Array,
+  variogram: Variogram,
+): { predicted: Float64Array; variance: Float64Array } {
   const n = xs.length;
   const s = n + 1;
   const cov = covarianceFunction(variogram);
@@ -42,7 +46,10 @@ function dubrule(xs: Float64Array, ys: Float64Array, values: Float64Array, vario
     lu[n * s + i] = 1;
   }
   const pivots = new Int32Array(s);
-  if (!luFactor(lu, s, pivots)) throw new Error('Kriging system is singular: check that the data points are distinct and the variogram is valid (a gaussian model usually needs a small nugget)');
+  if (!luFactor(lu, s, pivots))
+    throw new Error(
+      'Kriging system is singular: check that the data points are distinct and the variogram is valid (a gaussian model usually needs a small nugget)',
+    );
   const alpha = new Float64Array(s);
   alpha.set(values);
   luSolve(lu, s, pivots, alpha);

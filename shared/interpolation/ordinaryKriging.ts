@@ -28,7 +28,12 @@ export interface KrigingEstimate {
  * ordinaryKriging(points, { model: 'exponential', nugget: 0, sill: 1, range: 30 }, [{ x: 5, y: 0 }]);
  * // [{ value: 2, variance: … }] — midway, equal weights
  */
-export function ordinaryKriging(points: readonly DataPoint[], variogram: Variogram, targets: readonly Target[], options: KrigingOptions = {}): KrigingEstimate[] {
+export function ordinaryKriging(
+  points: readonly DataPoint[],
+  variogram: Variogram,
+  targets: readonly Target[],
+  options: KrigingOptions = {},
+): KrigingEstimate[] {
   const { xs, ys, values } = validatePoints(points, 2, 'Ordinary kriging');
   validateVariogram(variogram);
   validateTargets(targets);

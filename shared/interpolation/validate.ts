@@ -11,7 +11,11 @@ function isFiniteNumber(v: unknown): v is number {
  * validatePoints([{ x: 0, y: 0, value: 1 }, { x: 0, y: 0, value: 2 }], 2, 'Ordinary kriging');
  * // throws "Duplicate location at (0, 0)"
  */
-export function validatePoints(points: readonly DataPoint[], minimum: number, what: string): { xs: Float64Array; ys: Float64Array; values: Float64Array } {
+export function validatePoints(
+  points: readonly DataPoint[],
+  minimum: number,
+  what: string,
+): { xs: Float64Array; ys: Float64Array; values: Float64Array } {
   if (!Array.isArray(points)) throw new Error('points must be an array');
   if (points.length < minimum) throw new Error(`${what} needs at least ${minimum} points, got ${points.length}`);
   const n = points.length;

@@ -31,7 +31,8 @@ export function validateVariogram(v: Variogram): void {
   if (!VARIOGRAM_MODELS.includes(v.model)) throw new Error(`Unknown variogram model: ${String(v.model)}`);
   for (const key of ['nugget', 'sill', 'range'] as const) {
     const value = v[key];
-    if (typeof value !== 'number' || !Number.isFinite(value)) throw new Error(`variogram.${key} must be a finite number, got ${String(value)}`);
+    if (typeof value !== 'number' || !Number.isFinite(value))
+      throw new Error(`variogram.${key} must be a finite number, got ${String(value)}`);
   }
   if (v.nugget < 0) throw new Error(`variogram.nugget must be ≥ 0, got ${v.nugget}`);
   if (v.sill < 0) throw new Error(`variogram.sill must be ≥ 0, got ${v.sill}`);

@@ -114,8 +114,7 @@ export function compactionScreen(input: CompactionScreenInput): CompactionScreen
   const burialS = h / rateMPerS;
   const tauS = (h * h) / cvM2PerS;
   const T = (rateMPerS * rateMPerS * burialS) / cvM2PerS;
-  const verdict: CompactionVerdict =
-    T <= GIBSON_T_DRAINED ? 'likely-drained' : T >= GIBSON_T_RETAINED ? 'likely-retained' : 'transitional';
+  const verdict: CompactionVerdict = T <= GIBSON_T_DRAINED ? 'likely-drained' : T >= GIBSON_T_RETAINED ? 'likely-retained' : 'transitional';
   return {
     tauYears: tauS / YEAR_S,
     burialYears: burialS / YEAR_S,

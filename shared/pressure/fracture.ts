@@ -60,9 +60,7 @@ export function fractureMatthewsKelly<I extends FractureMatthewsKellyInput>(inpu
   const fn = 'fractureMatthewsKelly';
   const { overburdenPa, porePa, ki } = input;
   const n = commonLength(fn, { overburdenPa, porePa, ki });
-  return fractureFromK(fn, overburdenPa, porePa, (i) => sampleAt(fn, 'ki', ki, i, 'nonNegative'), n) as ResultOf<
-    I[keyof I]
-  >;
+  return fractureFromK(fn, overburdenPa, porePa, (i) => sampleAt(fn, 'ki', ki, i, 'nonNegative'), n) as ResultOf<I[keyof I]>;
 }
 
 export interface FractureHubbertWillisInput {

@@ -7,10 +7,7 @@ import type { Numeric, NumericArray } from '../units/convert';
  */
 
 function isNumericArray(value: unknown): value is NumericArray {
-  return (
-    Array.isArray(value) ||
-    (ArrayBuffer.isView(value) && !(value instanceof DataView))
-  );
+  return Array.isArray(value) || (ArrayBuffer.isView(value) && !(value instanceof DataView));
 }
 
 /**

@@ -237,8 +237,7 @@ export function fitNormalTrend(depthM: NumericArray, values: NumericArray, optio
   const fromM = param(FN, 'fromM', options.fromM, { min: 0 });
   const toM = param(FN, 'toM', options.toM);
   if (!(toM > fromM)) throw new Error(`${FN}: toM must be greater than fromM (got ${fromM} and ${toM})`);
-  const matrixValue =
-    options.matrixValue === undefined ? undefined : param(FN, 'matrixValue', options.matrixValue, { min: 0 });
+  const matrixValue = options.matrixValue === undefined ? undefined : param(FN, 'matrixValue', options.matrixValue, { min: 0 });
   if (model === 'loglinear' && matrixValue !== undefined) {
     throw new Error(`${FN}: matrixValue applies to the exponential model only`);
   }

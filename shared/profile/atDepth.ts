@@ -50,13 +50,18 @@ export function poreIntervalTvdM(profile: Profile): [number, number] | null {
  * else r.reason; // 'its pore-pressure curve ends at 2300 m TVDSS, above the depth'
  */
 export function pressureAtDepth(profile: Profile, tvdM: number): PressureAtDepthResult {
-  if (typeof tvdM !== 'number' || !Number.isFinite(tvdM) || tvdM <= 0) throw new Error(`pressureAtDepth: tvdM must be a finite depth > 0 (got ${String(tvdM)})`);
+  if (typeof tvdM !== 'number' || !Number.isFinite(tvdM) || tvdM <= 0)
+    throw new Error(`pressureAtDepth: tvdM must be a finite depth > 0 (got ${String(tvdM)})`);
   const { porePa, poreFilledPa } = profile;
   if (!porePa || !poreFilledPa) {
     const why = profile.notes.find((n) => /^Pore pressure by|needs a normal compaction trend/.test(n));
-    return { ok: false, reason: why ? `no log-derived pore pressure: ${why}` : 'no log-derived pore pressure: the interpretation has no pore-pressure method' };
+    return {
+      ok: false,
+      reason: why ? `no log-derived pore pressure: ${why}` : 'no log-derived pore pressure: the interpretation has no pore-pressure method',
+    };
   }
-  if (tvdM <= profile.mudlineTvdM) return { ok: false, reason: `the depth lies above its mudline (${tvdss(profile, profile.mudlineTvdM)})` };
+  if (tvdM <= profile.mudlineTvdM)
+    return { ok: false, reason: `the depth lies above its mudline (${tvdss(profile, profile.mudlineTvdM)})` };
   const interval = poreIntervalTvdM(profile);
   if (!interval) return { ok: false, reason: 'its pore-pressure method found no usable log samples (no shale samples or no readings)' };
   if (tvdM > interval[1]) return { ok: false, reason: `its pore-pressure curve ends at ${tvdss(profile, interval[1])}, above the depth` };
@@ -64,7 +69,8 @@ export function pressureAtDepth(profile: Profile, tvdM: number): PressureAtDepth
   const pore = interpolateAt(profile.tvdM, poreFilledPa, tvdM);
   const hydrostaticPa = interpolateAt(profile.tvdM, profile.hydrostaticPa, tvdM);
   const overburdenPa = interpolateAt(profile.tvdM, profile.overburdenPa, tvdM);
-  if (!Number.isFinite(pore) || !Number.isFinite(hydrostaticPa)) return { ok: false, reason: 'its pore-pressure curve has no value at the depth' };
+  if (!Number.isFinite(pore) || !Number.isFinite(hydrostaticPa))
+    return { ok: false, reason: 'its pore-pressure curve has no value at the depth' };
   return {
     ok: true,
     value: { tvdM, porePa: pore, hydrostaticPa, overburdenPa, poreEmwKgM3: pore / (G * tvdM), overpressurePa: pore - hydrostaticPa },

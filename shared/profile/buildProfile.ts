@@ -54,7 +54,12 @@ const METHOD_NAMES: Record<PoreSettings['method'], string> = {
  * (EMW from the rig datum), and how many samples had a value.
  * @example shareBelowNormal(tvdM, porePa, hydrostaticPa, 36).fraction; // 0.62
  */
-export function shareBelowNormal(tvdM: NumericArray, curvePa: NumericArray, normalPa: NumericArray, marginKgM3: number): { fraction: number; count: number } {
+export function shareBelowNormal(
+  tvdM: NumericArray,
+  curvePa: NumericArray,
+  normalPa: NumericArray,
+  marginKgM3: number,
+): { fraction: number; count: number } {
   let count = 0;
   let below = 0;
   for (let i = 0; i < tvdM.length; i++) {
@@ -163,7 +168,8 @@ function onGrid(values: NumericArray | undefined, n: number, offset: number, tot
 function checkAscending(tvdM: NumericArray): void {
   for (let i = 0; i < tvdM.length; i++) {
     const z = tvdM[i];
-    if (typeof z !== 'number' || !Number.isFinite(z) || z < 0) throw new Error(`buildProfile: tvdM[${i}] must be a finite depth >= 0 (got ${z})`);
+    if (typeof z !== 'number' || !Number.isFinite(z) || z < 0)
+      throw new Error(`buildProfile: tvdM[${i}] must be a finite depth >= 0 (got ${z})`);
     if (i > 0 && z < tvdM[i - 1]) throw new Error(`buildProfile: tvdM must be sorted ascending (tvdM[${i}] = ${z} after ${tvdM[i - 1]})`);
   }
 }
@@ -197,7 +203,13 @@ export function buildProfile(input: BuildProfileInput): Profile {
   const deepestObs = observations.reduce((m, o) => Math.max(m, o.tvdM), 0);
   const base = Math.max(input.baseTvdM ?? 0, deepestObs, mudlineTvdM + step);
 
-  const grid = extendGrid(input.tvdM, input.mdM, [well.airGapM, seaLevelTvdM, mudlineTvdM].filter((z) => z > 0), base, step);
+  const grid = extendGrid(
+    input.tvdM,
+    input.mdM,
+    [well.airGapM, seaLevelTvdM, mudlineTvdM].filter((z) => z > 0),
+    base,
+    step,
+  );
   const tvdM = grid.tvd;
   const n = tvdM.length;
   const at = (v: NumericArray | undefined) => onGrid(v, grid.count, grid.fromLog, n);
@@ -288,15 +300,22 @@ export function buildProfile(input: BuildProfileInput): Profile {
   if (porePa && pore) {
     const share = shareBelowNormal(tvdM, porePa, hydrostaticPa, belowMargin);
     if (share.count > 0 && share.fraction > minFraction) {
-      const fix = pore.method === 'bowers' ? "calibrate A and B to this basin's formation tests" : 'check the normal trend and the exponent against formation tests';
-      notes.push(`Pore pressure from ${METHOD_NAMES[pore.method]} is below hydrostatic over ${Math.round(share.fraction * 100)} % of the logged interval: ${fix}.`);
+      const fix =
+        pore.method === 'bowers'
+          ? "calibrate A and B to this basin's formation tests"
+          : 'check the normal trend and the exponent against formation tests';
+      notes.push(
+        `Pore pressure from ${METHOD_NAMES[pore.method]} is below hydrostatic over ${Math.round(share.fraction * 100)} % of the logged interval: ${fix}.`,
+      );
     }
   }
   if (fracturePa && porePa) {
     const logged = Float64Array.from(fracturePa, (v, i) => (Number.isNaN(porePa![i]) ? NaN : v));
     const share = shareBelowNormal(tvdM, logged, hydrostaticPa, belowMargin);
     if (share.count > 0 && share.fraction > 0) {
-      notes.push(`Fracture pressure is below hydrostatic over ${Math.max(1, Math.round(share.fraction * 100))} % of the logged interval: it follows the pore pressure, so fix that first.`);
+      notes.push(
+        `Fracture pressure is below hydrostatic over ${Math.max(1, Math.round(share.fraction * 100))} % of the logged interval: it follows the pore pressure, so fix that first.`,
+      );
     }
   }
 

@@ -63,7 +63,8 @@ export function profileCsv(profile: Profile, options: ProfileCsvOptions): string
     'Density (kg/m3)',
     'Density source',
   ];
-  if (profile.normalTrend) header.push(profile.normalTrendCurve ? `Normal trend (${TREND_UNIT[profile.normalTrendCurve]})` : 'Normal trend');
+  if (profile.normalTrend)
+    header.push(profile.normalTrendCurve ? `Normal trend (${TREND_UNIT[profile.normalTrendCurve]})` : 'Normal trend');
   lines.push(header.map(field).join(','));
   const dDigits = 2;
   const pDigits = pu === 'Pa' || pu === 'kPa' || pu === 'psi' ? 1 : 4;

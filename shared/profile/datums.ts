@@ -16,7 +16,8 @@ export interface WellDatums {
 }
 
 function check(fn: string, name: string, value: number, min: number): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw new Error(`${fn}: ${name} must be a finite number (got ${String(value)})`);
+  if (typeof value !== 'number' || !Number.isFinite(value))
+    throw new Error(`${fn}: ${name} must be a finite number (got ${String(value)})`);
   if (value < min) throw new Error(`${fn}: ${name} must be >= ${min} (got ${value})`);
   return value;
 }

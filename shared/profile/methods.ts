@@ -22,8 +22,7 @@ export type PoreSettings = (
 
 /** Fracture-pressure method as the interpretation stores it. */
 export type FractureSettings =
-  | { method: 'eaton'; poissonTop: number; poissonGradientPerKm: number }
-  | { method: 'matthews-kelly'; ki: number };
+  { method: 'eaton'; poissonTop: number; poissonGradientPerKm: number } | { method: 'matthews-kelly'; ki: number };
 
 /**
  * Running-median window for new interpretations, m: long enough to take out spikes and thin beds, short against a
@@ -45,7 +44,10 @@ export const BOWERS_STARTING = { v0: 5000, A: 4.4561, B: 0.8168, U: 3.13 } as co
  * without unloading; the log smoothing carries over from the settings being replaced, else the default.
  * @example startingPore('eaton-resistivity'); // { method: 'eaton-resistivity', exponent: 1.2, smoothingM: 20 }
  */
-export function startingPore(method: PoreSettings['method'], previous?: { smoothingM?: number } | null): PoreSettings & { smoothingM: number } {
+export function startingPore(
+  method: PoreSettings['method'],
+  previous?: { smoothingM?: number } | null,
+): PoreSettings & { smoothingM: number } {
   const smoothingM = previous?.smoothingM ?? DEFAULT_SMOOTHING_M;
   if (method === 'eaton-sonic') return { method, exponent: EATON_DEFAULT_EXPONENT.sonic, smoothingM };
   if (method === 'eaton-resistivity') return { method, exponent: EATON_DEFAULT_EXPONENT.resistivity, smoothingM };
@@ -96,7 +98,9 @@ export function porePressure(settings: PoreSettings, inputs: PoreInputs): Float6
  * @example poissonProfile(0.3, 0.05, [0, 2000], 0); // Float64Array [0.3, 0.4]
  */
 export function poissonProfile(poissonTop: number, gradientPerKm: number, tvdM: ArrayLike<number>, mudlineTvdM: number): Float64Array {
-  return Float64Array.from(tvdM, (z) => Math.min(POISSON_MAX, Math.max(0, poissonTop + (gradientPerKm * Math.max(0, z - mudlineTvdM)) / 1000)));
+  return Float64Array.from(tvdM, (z) =>
+    Math.min(POISSON_MAX, Math.max(0, poissonTop + (gradientPerKm * Math.max(0, z - mudlineTvdM)) / 1000)),
+  );
 }
 
 /**

@@ -25,7 +25,8 @@ export function runningMedian(depthM: NumericArray, values: NumericArray, window
   if (depthM.length !== values.length) throw new Error(`${fn}: depthM has length ${depthM.length} but values has length ${values.length}`);
   if (!(windowM >= 0) || !Number.isFinite(windowM)) throw new Error(`${fn}: windowM must be a finite number >= 0 (got ${windowM})`);
   for (let i = 1; i < depthM.length; i++) {
-    if (!(depthM[i] >= depthM[i - 1])) throw new Error(`${fn}: depthM must be sorted ascending (depthM[${i}] = ${depthM[i]} after ${depthM[i - 1]})`);
+    if (!(depthM[i] >= depthM[i - 1]))
+      throw new Error(`${fn}: depthM must be sorted ascending (depthM[${i}] = ${depthM[i]} after ${depthM[i - 1]})`);
   }
   const n = values.length;
   const out = Float64Array.from(values as ArrayLike<number>);

@@ -43,7 +43,8 @@ const PARAM_NAMES: Record<NormalTrendModel, readonly string[]> = {
 function requireParams(fn: string, model: NormalTrendModel, params: Record<string, number>): void {
   for (const name of PARAM_NAMES[model]) {
     const v = params[name];
-    if (typeof v !== 'number' || !Number.isFinite(v)) throw new Error(`${fn}: ${model} trend parameter "${name}" must be a finite number (got ${String(v)})`);
+    if (typeof v !== 'number' || !Number.isFinite(v))
+      throw new Error(`${fn}: ${model} trend parameter "${name}" must be a finite number (got ${String(v)})`);
   }
 }
 
@@ -60,11 +61,7 @@ export function trendAt(model: NormalTrendModel, params: Record<string, number>,
  * The trend on every sample, NaN above the mudline (no sediment there).
  * @example trendValues({ model: 'loglinear', params: { a: 0, b: 1e-4 } }, [50, 1100], 100); // Float64Array [NaN, 1.2589]
  */
-export function trendValues(
-  trend: Pick<TrendSettings, 'model' | 'params'>,
-  tvdM: NumericArray,
-  mudlineTvdM: number,
-): Float64Array {
+export function trendValues(trend: Pick<TrendSettings, 'model' | 'params'>, tvdM: NumericArray, mudlineTvdM: number): Float64Array {
   requireParams('trendValues', trend.model, trend.params);
   const out = new Float64Array(tvdM.length);
   for (let i = 0; i < tvdM.length; i++) {

@@ -18,7 +18,14 @@ export interface DrillingWindow {
   widthTvdM: number;
 }
 
-const NONE: DrillingWindow = { maxPoreKgM3: NaN, maxPoreTvdM: NaN, minFractureKgM3: NaN, minFractureTvdM: NaN, widthKgM3: NaN, widthTvdM: NaN };
+const NONE: DrillingWindow = {
+  maxPoreKgM3: NaN,
+  maxPoreTvdM: NaN,
+  minFractureKgM3: NaN,
+  minFractureTvdM: NaN,
+  widthKgM3: NaN,
+  widthTvdM: NaN,
+};
 
 /**
  * The window from interpreted curves, read over the samples where both pore and fracture pressure exist (the

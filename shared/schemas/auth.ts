@@ -5,10 +5,7 @@ import { ROLES } from '../auth/permissions';
 export const roleSchema = z.enum(ROLES);
 
 export const emailSchema = z.string().trim().toLowerCase().email('must be a valid e-mail address').max(254);
-export const passwordSchema = z
-  .string()
-  .min(10, 'must be at least 10 characters')
-  .max(200, 'must be at most 200 characters');
+export const passwordSchema = z.string().min(10, 'must be at least 10 characters').max(200, 'must be at most 200 characters');
 
 export const signInBody = z.object({
   email: emailSchema,

@@ -30,7 +30,10 @@ export const poreMethodSchema = z.discriminatedUnion('method', [
     v0: z.number().default(5000),
     A: z.number().positive(),
     B: z.number().positive(),
-    unloading: z.object({ vMaxMs: z.number().positive(), U: z.number().min(1) }).nullable().default(null),
+    unloading: z
+      .object({ vMaxMs: z.number().positive(), U: z.number().min(1) })
+      .nullable()
+      .default(null),
   }),
 ]);
 

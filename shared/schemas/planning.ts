@@ -80,11 +80,7 @@ export const plannedWellSchema = z.object({
 export type PlannedWell = z.infer<typeof plannedWellSchema>;
 
 export const offsetCandidatesQuery = z.object({
-  radiusKm: z.coerce
-    .number()
-    .gt(0, 'must be above 0 km')
-    .max(500, 'must be at most 500 km')
-    .default(25),
+  radiusKm: z.coerce.number().gt(0, 'must be above 0 km').max(500, 'must be at most 500 km').default(25),
   /** Use the planned well's prospect polygon plus this buffer instead of a radius. */
   prospectBufferKm: z.coerce.number().min(0).max(100).optional(),
 });

@@ -11,7 +11,12 @@ export const SURFACE_QUANTITY_LABELS: Record<SurfaceQuantity, string> = {
 };
 
 /** What kind of value each quantity maps, and the SI unit its values, residuals and standard deviations are in. */
-export const SURFACE_QUANTITY_KINDS = { top_tvdss: 'depth', top_below_mudline: 'depth', emw_at_depth: 'emw', overpressure_at_depth: 'pressure' } as const satisfies Record<SurfaceQuantity, string>;
+export const SURFACE_QUANTITY_KINDS = {
+  top_tvdss: 'depth',
+  top_below_mudline: 'depth',
+  emw_at_depth: 'emw',
+  overpressure_at_depth: 'pressure',
+} as const satisfies Record<SurfaceQuantity, string>;
 export type SurfaceQuantityKind = (typeof SURFACE_QUANTITY_KINDS)[SurfaceQuantity];
 export const SURFACE_KIND_SI_UNITS = { depth: 'm', emw: 'kg/m3', pressure: 'Pa' } as const satisfies Record<SurfaceQuantityKind, string>;
 export type SurfaceSiUnit = (typeof SURFACE_KIND_SI_UNITS)[SurfaceQuantityKind];
@@ -43,43 +48,51 @@ export const variogramSchema = z.object({
   range: z.number().positive(),
 });
 
-export const surfaceRequestBody = z.object({
-  name: z.string().trim().min(1).max(120).optional(),
-  quantity: z.enum(SURFACE_QUANTITIES).default('top_tvdss'),
-  /** Which wells: listed, a planned well's offset set, or (default) accepted TOP picks within the prospect + buffer. */
-  wells: z
-    .discriminatedUnion('from', [
-      z.object({ from: z.literal('prospect'), bufferKm: z.number().min(0).max(200).default(10) }),
-      z.object({ from: z.literal('offset-set'), plannedWellId: z.string().uuid() }),
-      z.object({ from: z.literal('list'), wellIds: z.array(z.string().uuid()).min(1).max(5000) }),
-    ])
-    .default({ from: 'prospect', bufferKm: 10 }),
-  method: z
-    .discriminatedUnion('kind', [
-      z.object({ kind: z.literal('kriging'), model: z.enum(['spherical', 'exponential', 'gaussian']).default('spherical'), variogram: variogramSchema.nullable().default(null), maxNeighbours: z.number().int().min(3).max(64).nullable().default(null), trend: z.enum(['none', 'planar']).default('none') }),
-      z.object({ kind: z.literal('idw'), power: z.number().min(0.5).max(6).default(2) }),
-    ])
-    .default({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: null, trend: 'none' }),
-  cellSizeM: z.number().min(25, 'must be at least 25 m').max(10_000).default(250),
-  /** The grid covers the prospect outline grown by this much, m. */
-  extentBufferKm: z.number().min(0).max(100).default(5),
-  /** The depth unit the run's depth was entered in: the run's name gives the depth in it. */
-  depthUnit: z.enum(['m', 'ft']).optional(),
-  /** The unit the contour interval was entered in (m, ft, ppg, psi…): contours are labelled in it, so they read as round values. */
-  contourLabelUnit: z.string().max(16).optional(),
-  /** Contour spacing of depth quantities, m. */
-  contourIntervalM: z.number().positive().max(2000).default(50),
-  /** Contour spacing of `emw_at_depth`, kg/m³ (default 20). */
-  contourIntervalKgM3: z.number().positive().max(1000).optional(),
-  /** Contour spacing of `overpressure_at_depth`, Pa (default 1 MPa). */
-  contourIntervalPa: z.number().positive().max(1e8).optional(),
-  /** The depth of `emw_at_depth` and `overpressure_at_depth`, TVD below sea level, m (required for those). */
-  depthTvdssM: z.number().min(0, 'must be at or below sea level (>= 0 m TVDSS)').max(15_000, 'must be at most 15000 m TVDSS').optional(),
-}).superRefine((b, ctx) => {
-  if (AT_DEPTH_QUANTITIES.includes(b.quantity) && b.depthTvdssM === undefined) {
-    ctx.addIssue({ code: 'custom', path: ['depthTvdssM'], message: `is required for ${b.quantity}: the depth below sea level, m` });
-  }
-});
+export const surfaceRequestBody = z
+  .object({
+    name: z.string().trim().min(1).max(120).optional(),
+    quantity: z.enum(SURFACE_QUANTITIES).default('top_tvdss'),
+    /** Which wells: listed, a planned well's offset set, or (default) accepted TOP picks within the prospect + buffer. */
+    wells: z
+      .discriminatedUnion('from', [
+        z.object({ from: z.literal('prospect'), bufferKm: z.number().min(0).max(200).default(10) }),
+        z.object({ from: z.literal('offset-set'), plannedWellId: z.string().uuid() }),
+        z.object({ from: z.literal('list'), wellIds: z.array(z.string().uuid()).min(1).max(5000) }),
+      ])
+      .default({ from: 'prospect', bufferKm: 10 }),
+    method: z
+      .discriminatedUnion('kind', [
+        z.object({
+          kind: z.literal('kriging'),
+          model: z.enum(['spherical', 'exponential', 'gaussian']).default('spherical'),
+          variogram: variogramSchema.nullable().default(null),
+          maxNeighbours: z.number().int().min(3).max(64).nullable().default(null),
+          trend: z.enum(['none', 'planar']).default('none'),
+        }),
+        z.object({ kind: z.literal('idw'), power: z.number().min(0.5).max(6).default(2) }),
+      ])
+      .default({ kind: 'kriging', model: 'spherical', variogram: null, maxNeighbours: null, trend: 'none' }),
+    cellSizeM: z.number().min(25, 'must be at least 25 m').max(10_000).default(250),
+    /** The grid covers the prospect outline grown by this much, m. */
+    extentBufferKm: z.number().min(0).max(100).default(5),
+    /** The depth unit the run's depth was entered in: the run's name gives the depth in it. */
+    depthUnit: z.enum(['m', 'ft']).optional(),
+    /** The unit the contour interval was entered in (m, ft, ppg, psi…): contours are labelled in it, so they read as round values. */
+    contourLabelUnit: z.string().max(16).optional(),
+    /** Contour spacing of depth quantities, m. */
+    contourIntervalM: z.number().positive().max(2000).default(50),
+    /** Contour spacing of `emw_at_depth`, kg/m³ (default 20). */
+    contourIntervalKgM3: z.number().positive().max(1000).optional(),
+    /** Contour spacing of `overpressure_at_depth`, Pa (default 1 MPa). */
+    contourIntervalPa: z.number().positive().max(1e8).optional(),
+    /** The depth of `emw_at_depth` and `overpressure_at_depth`, TVD below sea level, m (required for those). */
+    depthTvdssM: z.number().min(0, 'must be at or below sea level (>= 0 m TVDSS)').max(15_000, 'must be at most 15000 m TVDSS').optional(),
+  })
+  .superRefine((b, ctx) => {
+    if (AT_DEPTH_QUANTITIES.includes(b.quantity) && b.depthTvdssM === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['depthTvdssM'], message: `is required for ${b.quantity}: the depth below sea level, m` });
+    }
+  });
 export type SurfaceRequest = z.input<typeof surfaceRequestBody>;
 
 /** Kriging with `maxNeighbours: null` uses every well up to this many (one factorisation, no seams), the nearest {@link DEFAULT_NEIGHBOURS} above. */
@@ -120,7 +133,14 @@ export const surfaceWellSchema = z.object({
   predicted: z.number().nullable(),
   /** For quantities at a depth: what the well's profile gives there (TVD below its rig datum, pressures in Pa). */
   atDepth: z
-    .object({ tvdM: z.number(), porePa: z.number(), hydrostaticPa: z.number(), overburdenPa: z.number(), poreEmwKgM3: z.number(), overpressurePa: z.number() })
+    .object({
+      tvdM: z.number(),
+      porePa: z.number(),
+      hydrostaticPa: z.number(),
+      overburdenPa: z.number(),
+      poreEmwKgM3: z.number(),
+      overpressurePa: z.number(),
+    })
     .nullable()
     .optional(),
 });
@@ -174,7 +194,11 @@ export const surfaceSchema = surfaceSummarySchema.extend({
   contours: z.object({ type: z.literal('FeatureCollection'), features: z.array(z.unknown()) }),
   extent: z.object({ type: z.literal('Polygon'), coordinates: z.array(z.array(z.tuple([z.number(), z.number()]))) }),
   variogram: z
-    .object({ model: variogramSchema, experimental: z.array(z.object({ lagM: z.number(), gamma: z.number(), pairs: z.number() })), fitted: z.boolean() })
+    .object({
+      model: variogramSchema,
+      experimental: z.array(z.object({ lagM: z.number(), gamma: z.number(), pairs: z.number() })),
+      fitted: z.boolean(),
+    })
     .nullable(),
   crossValidation: z.object({ rmse: z.number(), meanError: z.number() }),
   wells: z.array(surfaceWellSchema),

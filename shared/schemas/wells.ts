@@ -62,13 +62,21 @@ export const WELL_SORTS = ['name', 'status', 'tdMdM', 'spudDate', 'waterDepthM',
 const csvList = <T extends readonly [string, ...string[]]>(values: T) =>
   z
     .string()
-    .transform((s) => s.split(',').map((x) => x.trim()).filter(Boolean))
+    .transform((s) =>
+      s
+        .split(',')
+        .map((x) => x.trim())
+        .filter(Boolean),
+    )
     .pipe(z.array(z.enum(values)));
 
 export const wellListQuery = z.object({
   q: z.string().trim().max(100).optional(),
   status: csvList(WELL_STATUSES).optional(),
-  hasPressures: z.enum(['true', 'false']).transform((v) => v === 'true').optional(),
+  hasPressures: z
+    .enum(['true', 'false'])
+    .transform((v) => v === 'true')
+    .optional(),
   bbox: z
     .string()
     .transform((s) => s.split(',').map(Number))
@@ -108,9 +116,7 @@ export const wellDetailSchema = wellSummarySchema.extend({
   note: z.string().nullable(),
   version: z.number(),
   tops: z.array(formationTopSchema),
-  survey: z
-    .object({ stations: z.number(), maxIncDeg: z.number(), maxDoglegDegPer30m: z.number(), tdTvdM: z.number() })
-    .nullable(),
+  survey: z.object({ stations: z.number(), maxIncDeg: z.number(), maxDoglegDegPer30m: z.number(), tdTvdM: z.number() }).nullable(),
   createdAt: z.string(),
 });
 export type WellDetail = z.infer<typeof wellDetailSchema>;

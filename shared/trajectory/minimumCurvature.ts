@@ -51,13 +51,19 @@ export function computeSurvey(stations: readonly StationInput[], tieIn?: TieIn):
   eastM[0] = tie.eastM;
 
   for (let k = 1; k < nodeCount; k++) {
-    const n1 = dirNorth[k - 1], e1 = dirEast[k - 1], d1 = dirDown[k - 1];
-    const n2 = dirNorth[k], e2 = dirEast[k], d2 = dirDown[k];
+    const n1 = dirNorth[k - 1],
+      e1 = dirEast[k - 1],
+      d1 = dirDown[k - 1];
+    const n2 = dirNorth[k],
+      e2 = dirEast[k],
+      d2 = dirDown[k];
     const beta = doglegAngle(n1, e1, d1, n2, e2, d2);
     if (Math.hypot(n1 + n2, e1 + e2, d1 + d2) < REVERSAL_TOLERANCE) {
       const a = k - 1 - firstStationNode;
       const from = a < 0 ? 'the tie-in' : `station ${a}`;
-      throw new Error(`Between ${from} and station ${k - firstStationNode} the direction reverses (dogleg 180°): no minimum-curvature arc exists`);
+      throw new Error(
+        `Between ${from} and station ${k - firstStationNode} the direction reverses (dogleg 180°): no minimum-curvature arc exists`,
+      );
     }
     const half = 0.5 * (mdM[k] - mdM[k - 1]) * ratioFactor(beta);
     northM[k] = northM[k - 1] + half * (n1 + n2);

@@ -39,11 +39,7 @@ export function unitFactor(fromUnit: UnitName | (string & {}), toUnit: UnitName 
  * convert(10, 'ppg', 'psi/ft');     // 0.519480…
  * convert([1000, 2000], 'm', 'ft'); // Float64Array [3280.84…, 6561.68…]
  */
-export function convert<V extends Numeric>(
-  value: V,
-  fromUnit: UnitName | (string & {}),
-  toUnit: UnitName | (string & {}),
-): ResultOf<V> {
+export function convert<V extends Numeric>(value: V, fromUnit: UnitName | (string & {}), toUnit: UnitName | (string & {})): ResultOf<V> {
   const from = lookUp(fromUnit);
   const to = lookUp(toUnit);
   if (from.dimension !== to.dimension) throw new Error(`Cannot convert "${fromUnit}" to "${toUnit}"`);

@@ -48,15 +48,7 @@ export const TIME_UNITS = UNITS_BY_QUANTITY.time;
  * equivalent density ρ is the gradient ρ·g; that is what lets ppg convert to psi/ft and kg/m3 alike.
  */
 export type Dimension =
-  | 'pressure'
-  | 'length'
-  | 'gradient'
-  | 'permeability'
-  | 'viscosity'
-  | 'compressibility'
-  | 'slowness'
-  | 'velocity'
-  | 'time';
+  'pressure' | 'length' | 'gradient' | 'permeability' | 'viscosity' | 'compressibility' | 'slowness' | 'velocity' | 'time';
 
 /** How many base units (Pa, m, Pa/m, m2, Pa.s, 1/Pa, us/m, m/s, s) one of this unit is. */
 export const UNIT_TABLE: Readonly<Record<UnitName, { dimension: Dimension; toBase: number }>> = {

@@ -1,7 +1,14 @@
 import { describe, expect, it, vi } from 'vitest';
 import { sessionSchema } from '@shared/schemas/auth';
 import { z } from 'zod';
-import { ApiClientError, createApiClient, describeApiError, onSessionExpired as registerExpiry, postMultipart, toFieldIssues } from './client';
+import {
+  ApiClientError,
+  createApiClient,
+  describeApiError,
+  onSessionExpired as registerExpiry,
+  postMultipart,
+  toFieldIssues,
+} from './client';
 import { signIn } from './auth';
 import { inviteMember, listOutbox } from './teams';
 
@@ -134,7 +141,9 @@ describe('session expiry', () => {
     registerExpiry(handler);
     const fetchImpl = fakeFetch(reply401('unauthenticated', 'Your session has ended.'));
     try {
-      const err = await rejection(postMultipart('/api/teams/t1/layers', new FormData(), { schema: z.object({}), bareFailure: () => 'x', fetchImpl }));
+      const err = await rejection(
+        postMultipart('/api/teams/t1/layers', new FormData(), { schema: z.object({}), bareFailure: () => 'x', fetchImpl }),
+      );
       expect(err.status).toBe(401);
       expect(handler).toHaveBeenCalledOnce();
       expect(fetchImpl).toHaveBeenCalledOnce();

@@ -87,7 +87,11 @@ function checkedReply<T>(status: number, schema: ZodType<T>, data: unknown): T {
   if (checked.success) return checked.data;
   const first = checked.error.issues[0];
   const where = first && first.path.length > 0 ? `${first.path.join('.')}: ` : '';
-  throw new ApiClientError(status, 'unexpected_reply', `The server sent a reply this page does not understand (${where}${first?.message ?? 'invalid'}).`);
+  throw new ApiClientError(
+    status,
+    'unexpected_reply',
+    `The server sent a reply this page does not understand (${where}${first?.message ?? 'invalid'}).`,
+  );
 }
 
 async function errorFromResponse(response: Response): Promise<ApiClientError> {
@@ -219,7 +223,9 @@ export async function postMultipart<T>(url: string, form: FormData, o: Multipart
     else {
       const { code, message, details } = parsed.data.error;
       const issues = toFieldIssues(details);
-      error = o.toError ? o.toError(response.status, code, message, details) : new ApiClientError(response.status, code, describeApiError(message, issues), issues);
+      error = o.toError
+        ? o.toError(response.status, code, message, details)
+        : new ApiClientError(response.status, code, describeApiError(message, issues), issues);
     }
     if (response.status === 401 && error instanceof ApiClientError) sessionExpiredHandler?.(error);
     throw error;

@@ -26,7 +26,10 @@ const previewReply = {
 
 describe('importFormEntries', () => {
   it('sends a preview as dryRun with mapping and units as JSON text', () => {
-    const entries = importFormEntries({ kind: 'wells', mapping: { Easting: 'x', Junk: null }, units: { waterDepth: 'ft' }, epsg: 32631 }, 'preview');
+    const entries = importFormEntries(
+      { kind: 'wells', mapping: { Easting: 'x', Junk: null }, units: { waterDepth: 'ft' }, epsg: 32631 },
+      'preview',
+    );
     expect(entries).toEqual([
       ['kind', 'wells'],
       ['mapping', '{"Easting":"x","Junk":null}'],
@@ -74,7 +77,12 @@ describe('previewImport / startImportJob', () => {
     const problems = [{ line: 3, column: 'Longitude', message: "'abc' is not a number" }];
     vi.stubGlobal(
       'fetch',
-      vi.fn(async () => Response.json({ error: { code: 'import_has_problems', message: 'wells.csv: 1 problem(s) found; nothing was imported.', details: problems } }, { status: 422 })),
+      vi.fn(async () =>
+        Response.json(
+          { error: { code: 'import_has_problems', message: 'wells.csv: 1 problem(s) found; nothing was imported.', details: problems } },
+          { status: 422 },
+        ),
+      ),
     );
     const error = await startImportJob('t1', { kind: 'wells' }, new File(['x'], 'wells.csv')).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ImportRejectedError);
@@ -89,9 +97,18 @@ describe('previewImport / startImportJob', () => {
   });
 
   it('says plainly when the server cannot be reached or the reply is not JSON', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))));
-    await expect(previewImport('t1', { kind: 'wells' }, new File(['x'], 'a.csv'))).rejects.toMatchObject({ status: 0, code: 'network_error' });
-    vi.stubGlobal('fetch', vi.fn(async () => new Response('<html>Request Entity Too Large</html>', { status: 413 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))),
+    );
+    await expect(previewImport('t1', { kind: 'wells' }, new File(['x'], 'a.csv'))).rejects.toMatchObject({
+      status: 0,
+      code: 'network_error',
+    });
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => new Response('<html>Request Entity Too Large</html>', { status: 413 })),
+    );
     await expect(previewImport('t1', { kind: 'wells' }, new File(['x'], 'a.csv'))).rejects.toMatchObject({
       status: 413,
       message: 'The file is too large to import.',

@@ -40,7 +40,10 @@ const lasFactsSchema = z.object({
     // The file gives X/Y but no LATI/LONG: only then does the EPSG code of X/Y matter.
     xyOnly: z.boolean().optional(),
     // Set when no well matches and the file's header places one: the commit creates it.
-    createWell: z.object({ name: z.string(), uwi: z.string().nullable(), lon: z.number(), lat: z.number(), locationFrom: z.string() }).nullable().optional(),
+    createWell: z
+      .object({ name: z.string(), uwi: z.string().nullable(), lon: z.number(), lat: z.number(), locationFrom: z.string() })
+      .nullable()
+      .optional(),
     indexUnit: z.string(),
     // NaN for a file without samples, which JSON carries as null.
     topMdM: z.number().nullable(),
@@ -109,9 +112,7 @@ export const importJobSchema = z.object({
   done: z.number(),
   total: z.number(),
   result: z.unknown().optional(),
-  error: z
-    .object({ status: z.number(), code: z.string(), message: z.string(), details: z.unknown().optional() })
-    .optional(),
+  error: z.object({ status: z.number(), code: z.string(), message: z.string(), details: z.unknown().optional() }).optional(),
 });
 export type ImportJob = z.infer<typeof importJobSchema>;
 

@@ -36,11 +36,42 @@ describe('uploadReferenceLayer', () => {
 
   it("passes the server's words on: the feature that is wrong, the size limit, the field", async () => {
     const reply = (status: number, body: unknown) => vi.fn<typeof fetch>(async () => Response.json(body, { status }));
-    const invalid = uploadReferenceLayer(TEAM, fields, file, reply(400, { error: { code: 'invalid_layer', message: 'Feature 2 is not a valid geometry: Self-intersection[-100.95 -32.45].', details: { feature: 2 } } }));
-    await expect(invalid).rejects.toMatchObject({ status: 400, code: 'invalid_layer', message: 'Feature 2 is not a valid geometry: Self-intersection[-100.95 -32.45].' });
-    const large = uploadReferenceLayer(TEAM, fields, file, reply(413, { error: { code: 'file_too_large', message: 'The layer file is larger than the 20 MB limit.' } }));
+    const invalid = uploadReferenceLayer(
+      TEAM,
+      fields,
+      file,
+      reply(400, {
+        error: {
+          code: 'invalid_layer',
+          message: 'Feature 2 is not a valid geometry: Self-intersection[-100.95 -32.45].',
+          details: { feature: 2 },
+        },
+      }),
+    );
+    await expect(invalid).rejects.toMatchObject({
+      status: 400,
+      code: 'invalid_layer',
+      message: 'Feature 2 is not a valid geometry: Self-intersection[-100.95 -32.45].',
+    });
+    const large = uploadReferenceLayer(
+      TEAM,
+      fields,
+      file,
+      reply(413, { error: { code: 'file_too_large', message: 'The layer file is larger than the 20 MB limit.' } }),
+    );
     await expect(large).rejects.toMatchObject({ status: 413, message: 'The layer file is larger than the 20 MB limit.' });
-    const field = uploadReferenceLayer(TEAM, fields, file, reply(400, { error: { code: 'validation_failed', message: 'Invalid body', details: [{ path: 'color', message: 'must be a colour like #3a7bd5' }] } }));
+    const field = uploadReferenceLayer(
+      TEAM,
+      fields,
+      file,
+      reply(400, {
+        error: {
+          code: 'validation_failed',
+          message: 'Invalid body',
+          details: [{ path: 'color', message: 'must be a colour like #3a7bd5' }],
+        },
+      }),
+    );
     const err = await field.catch((e: unknown) => e);
     expect(err).toBeInstanceOf(ApiClientError);
     expect((err as ApiClientError).message).toBe('color: must be a colour like #3a7bd5');
@@ -49,7 +80,10 @@ describe('uploadReferenceLayer', () => {
 
   it('explains a bare 413 from a proxy and a dropped connection', async () => {
     const proxy = vi.fn<typeof fetch>(async () => new Response('<html>413 Request Entity Too Large</html>', { status: 413 }));
-    await expect(uploadReferenceLayer(TEAM, fields, file, proxy)).rejects.toMatchObject({ status: 413, message: 'The layer file is too large for the server to accept.' });
+    await expect(uploadReferenceLayer(TEAM, fields, file, proxy)).rejects.toMatchObject({
+      status: 413,
+      message: 'The layer file is too large for the server to accept.',
+    });
     const offline = vi.fn<typeof fetch>(async () => {
       throw new TypeError('Failed to fetch');
     });

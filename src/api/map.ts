@@ -9,9 +9,7 @@ const wellsPath = (teamId: string) => `/api/teams/${encodeURIComponent(teamId)}/
 export const MAX_WELL_PAGE = 500;
 
 // Only the shape the map needs is checked; MapLibre validates the rest of the style itself.
-const styleShape = z
-  .object({ version: z.literal(8), sources: z.record(z.string(), z.unknown()), layers: z.array(z.unknown()) })
-  .loose();
+const styleShape = z.object({ version: z.literal(8), sources: z.record(z.string(), z.unknown()), layers: z.array(z.unknown()) }).loose();
 
 /**
  * The offline basemap style for a theme, served by our own `/tiles` router.

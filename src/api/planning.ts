@@ -97,7 +97,12 @@ export function offsetSearchQuery(search: OffsetSearch): string {
  * Wells inside a prospect's outline or within `bufferKm` of it, best first (distances from the outline).
  * @example const around = await listProspectWells(teamId, prospect.id, 10);
  */
-export function listProspectWells(teamId: string, prospectId: string, bufferKm: number, client: ApiClient = api): Promise<OffsetCandidate[]> {
+export function listProspectWells(
+  teamId: string,
+  prospectId: string,
+  bufferKm: number,
+  client: ApiClient = api,
+): Promise<OffsetCandidate[]> {
   return client.get(`/api/teams/${teamId}/prospects/${prospectId}/offset-wells?bufferKm=${bufferKm}`, z.array(offsetCandidateSchema));
 }
 
@@ -111,10 +116,7 @@ export function listOffsetCandidates(
   search: OffsetSearch,
   client: ApiClient = api,
 ): Promise<OffsetCandidate[]> {
-  return client.get(
-    `${onePlanned(teamId, plannedWellId)}/offset-candidates?${offsetSearchQuery(search)}`,
-    z.array(offsetCandidateSchema),
-  );
+  return client.get(`${onePlanned(teamId, plannedWellId)}/offset-candidates?${offsetSearchQuery(search)}`, z.array(offsetCandidateSchema));
 }
 
 /**

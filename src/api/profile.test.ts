@@ -11,7 +11,9 @@ describe('interpretation API', () => {
   afterEach(() => vi.unstubAllGlobals());
 
   it('reads "no accepted interpretation" as null', async () => {
-    installFakeServer({ [`GET ${base}/current`]: () => errorReply(404, 'not_found', 'An accepted interpretation of this well was not found') });
+    installFakeServer({
+      [`GET ${base}/current`]: () => errorReply(404, 'not_found', 'An accepted interpretation of this well was not found'),
+    });
     expect(await currentInterpretation(TEAM_A, WELL)).toBeNull();
   });
 
@@ -21,7 +23,15 @@ describe('interpretation API', () => {
       [`POST ${base}`]: () => errorReply(409, 'conflict', 'Someone saved a newer interpretation', { currentVersion: 4 }),
     });
     await expect(currentInterpretation(TEAM_A, WELL)).rejects.toMatchObject({ status: 500 });
-    const err = await saveInterpretation(TEAM_A, WELL, { normalDensityKgM3: 1030, trend: null, pore: null, fracture: null, top: null, baseVersion: 3, status: 'accepted' }).catch((e) => e);
+    const err = await saveInterpretation(TEAM_A, WELL, {
+      normalDensityKgM3: 1030,
+      trend: null,
+      pore: null,
+      fracture: null,
+      top: null,
+      baseVersion: 3,
+      status: 'accepted',
+    }).catch((e) => e);
     expect(isStaleVersion(err)).toBe(true);
   });
 });

@@ -51,8 +51,17 @@ export function getSurface(teamId: string, surfaceId: string, client: ApiClient 
  * rejects at once with status 400; problems with the wells (fewer than 3 picks…) come back as the job's error.
  * @example const { jobId } = await startSurfaceJob(teamId, prospectId, { wells: { from: 'prospect', bufferKm: 30 } });
  */
-export function startSurfaceJob(teamId: string, prospectId: string, body: SurfaceRequest, client: ApiClient = api): Promise<{ jobId: string }> {
-  return client.post(`${teamPath(teamId)}/prospects/${encodeURIComponent(prospectId)}/surfaces?async=true`, body, z.object({ jobId: z.string() }));
+export function startSurfaceJob(
+  teamId: string,
+  prospectId: string,
+  body: SurfaceRequest,
+  client: ApiClient = api,
+): Promise<{ jobId: string }> {
+  return client.post(
+    `${teamPath(teamId)}/prospects/${encodeURIComponent(prospectId)}/surfaces?async=true`,
+    body,
+    z.object({ jobId: z.string() }),
+  );
 }
 
 /**
@@ -75,6 +84,11 @@ export function deleteSurface(teamId: string, surfaceId: string, client: ApiClie
  * The surface at a planned well's location (value and standard deviation in `unit`: m, kg/m3 or Pa); nulls outside the grid.
  * @example const { value, stdDev } = await plannedWellSurfaceValue(teamId, surfaceId, plannedWellId);
  */
-export function plannedWellSurfaceValue(teamId: string, surfaceId: string, plannedWellId: string, client: ApiClient = api): Promise<SurfacePointValue> {
+export function plannedWellSurfaceValue(
+  teamId: string,
+  surfaceId: string,
+  plannedWellId: string,
+  client: ApiClient = api,
+): Promise<SurfacePointValue> {
   return client.get(`${surfacePath(teamId, surfaceId)}/planned-wells/${encodeURIComponent(plannedWellId)}/value`, surfacePointValueSchema);
 }

@@ -69,7 +69,10 @@ describe('wells API calls', () => {
 
   it('sends the version with a patch and reports a stale one as 409 conflict', async () => {
     const fetchImpl = vi.fn<typeof fetch>(async () =>
-      Response.json({ error: { code: 'conflict', message: 'This well was changed by someone else.', details: { currentVersion: 4 } } }, { status: 409 }),
+      Response.json(
+        { error: { code: 'conflict', message: 'This well was changed by someone else.', details: { currentVersion: 4 } } },
+        { status: 409 },
+      ),
     );
     const call = patchWell('t1', summary.id, { version: 3, status: 'abandoned' }, createApiClient({ fetchImpl }));
     await expect(call).rejects.toMatchObject({ status: 409, code: 'conflict' });

@@ -25,7 +25,13 @@ function previewOf(text: string, fileName: string, mapping?: Record<string, stri
     notes: [],
     counts: { records: csv.rows.length, invalid: 0, valid: csv.rows.length, create: csv.rows.length, update: 0 },
     invalidLines: [],
-    csv: { delimiter: ',', decimalComma: false, encoding: 'utf-8', columns: csv.header.map((name) => ({ name, field: used[name] ?? null })), units: { waterDepth: 'm' } },
+    csv: {
+      delimiter: ',',
+      decimalComma: false,
+      encoding: 'utf-8',
+      columns: csv.header.map((name) => ({ name, field: used[name] ?? null })),
+      units: { waterDepth: 'm' },
+    },
     preview: csv.rows.map((r) => ({ line: r.line, name: r.cells[0], action: 'create' })),
   };
 }
@@ -56,7 +62,12 @@ function fakeImportServer(options: { delayFor?: (fileName: string) => number } =
     if (url === `/api/teams/${TEAM}/imports/jobs/job-1`) {
       polls += 1;
       if (polls < 2) return Response.json({ id: 'job-1', state: 'running', phase: 'writing new wells', done: 1, total: 2 });
-      const result = { ...previewOf('name,lon,lat\nA-1,1,2\n', 'w.csv'), dryRun: false, skipped: false, outcome: { uploadId: 'u1', created: 1, updated: 0, skippedLines: [] } };
+      const result = {
+        ...previewOf('name,lon,lat\nA-1,1,2\n', 'w.csv'),
+        dryRun: false,
+        skipped: false,
+        outcome: { uploadId: 'u1', created: 1, updated: 0, skippedLines: [] },
+      };
       return Response.json({ id: 'job-1', state: 'done', phase: 'finished', done: 2, total: 2, result });
     }
     return Response.json({ error: { code: 'not_found', message: `no route ${url}` } }, { status: 404 });

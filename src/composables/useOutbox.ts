@@ -9,9 +9,7 @@ import { useRequest } from './useRequest';
  */
 export function useOutbox(teamId: Ref<string | null>) {
   const request = useRequest<OutboxMessage[]>(() => (teamId.value ? listOutbox(teamId.value) : Promise.resolve([])));
-  const messages = computed(() =>
-    [...(request.data.value ?? [])].sort((a, b) => Date.parse(b.receivedAt) - Date.parse(a.receivedAt)),
-  );
+  const messages = computed(() => [...(request.data.value ?? [])].sort((a, b) => Date.parse(b.receivedAt) - Date.parse(a.receivedAt)));
   watch(teamId, () => void request.run(), { immediate: true });
   return { messages, state: request.state, error: request.error, reload: request.run };
 }

@@ -42,7 +42,14 @@ export interface CompareWell {
  */
 export function parseWellIds(query: unknown, max = 8): string[] {
   const raw = Array.isArray(query) ? query.join(',') : typeof query === 'string' ? query : '';
-  return [...new Set(raw.split(',').map((s) => s.trim()).filter(Boolean))].slice(0, max);
+  return [
+    ...new Set(
+      raw
+        .split(',')
+        .map((s) => s.trim())
+        .filter(Boolean),
+    ),
+  ].slice(0, max);
 }
 
 /**
@@ -54,7 +61,11 @@ export function summarise(profile: Profile | null, pressures: readonly PressureO
   const interpretedWindow = profile?.porePa && profile.fracturePa ? profile.window : null;
   const maxEmwKgM3 = interpretedWindow && Number.isFinite(interpretedWindow.maxPoreKgM3) ? interpretedWindow.maxPoreKgM3 : measuredMax;
   const maxEmwBasis: CompareWell['maxEmwBasis'] =
-    interpretedWindow && Number.isFinite(interpretedWindow.maxPoreKgM3) ? 'interpreted' : Number.isFinite(measuredMax) ? 'measured' : 'none';
+    interpretedWindow && Number.isFinite(interpretedWindow.maxPoreKgM3)
+      ? 'interpreted'
+      : Number.isFinite(measuredMax)
+        ? 'measured'
+        : 'none';
   const measured = measuredWindow(pressures);
   const window = interpretedWindow && Number.isFinite(interpretedWindow.widthKgM3) ? interpretedWindow : measured;
   const windowBasis: CompareWell['windowBasis'] =
@@ -102,7 +113,9 @@ async function loadOne(teamId: string, wellId: string): Promise<CompareWell> {
         interpretation,
         observations: pressures,
         baseTvdM: well.tdTvdM ?? undefined,
-        top: interpretation.top ? { marginKgM3: interpretation.top.marginKgM3, minThicknessM: interpretation.top.minThicknessM } : undefined,
+        top: interpretation.top
+          ? { marginKgM3: interpretation.top.marginKgM3, minThicknessM: interpretation.top.minThicknessM }
+          : undefined,
       });
     } catch (e) {
       error = e instanceof Error ? e.message : String(e);

@@ -1,7 +1,14 @@
 import { computed, ref, shallowRef, watch, type Ref } from 'vue';
 import type { LogCurveData, LogCurveSummary, PressureObservation, SurveyStation, WellDetail } from '@shared/schemas/wells';
 import type { Interpretation } from '@shared/schemas/interpretations';
-import { alignLogs, profileWellFromHeader, type AlignedLogs, type LogCurveInput, type ProfileLogRole, type ProfileWell } from '@shared/profile';
+import {
+  alignLogs,
+  profileWellFromHeader,
+  type AlignedLogs,
+  type LogCurveInput,
+  type ProfileLogRole,
+  type ProfileWell,
+} from '@shared/profile';
 import * as wellsApi from '@/api/wells';
 import * as profileApi from '@/api/profile';
 import type { LoadState } from '@/stores/session';
@@ -26,7 +33,9 @@ export function pickCurves(curves: readonly LogCurveSummary[]): Partial<Record<P
  * A well's datums as the profile builder wants them, by the rule the server's surfaces share (`profileWellFromHeader`).
  * @example profileWell({ datumElevationM: 25, waterDepthM: 100, airGapM: null, groundElevationM: null, offshore: true }); // airGapM 25
  */
-export function profileWell(w: Pick<WellDetail, 'datumElevationM' | 'waterDepthM' | 'airGapM' | 'groundElevationM' | 'offshore'>): ProfileWell {
+export function profileWell(
+  w: Pick<WellDetail, 'datumElevationM' | 'waterDepthM' | 'airGapM' | 'groundElevationM' | 'offshore'>,
+): ProfileWell {
   return profileWellFromHeader(w);
 }
 

@@ -90,11 +90,15 @@ export function useProfileEditor(
     open(newest.value);
   }
 
-  watch(versions, (now, before) => {
-    if (before === undefined || now[0]?.version !== before[0]?.version || opened.value === null) {
-      if (saveState.value !== 'saving') openNewest();
-    }
-  }, { immediate: true });
+  watch(
+    versions,
+    (now, before) => {
+      if (before === undefined || now[0]?.version !== before[0]?.version || opened.value === null) {
+        if (saveState.value !== 'saving') openNewest();
+      }
+    },
+    { immediate: true },
+  );
 
   async function run(task: () => Promise<Interpretation>): Promise<Interpretation | null> {
     if (!teamId.value) throw new Error('No team selected');

@@ -30,7 +30,9 @@ describe('figure export', () => {
     expect(() => svgText(svgWith('just a plot'))).toThrow('The figure lost its caution line; not exported.');
   });
   it('refuses a demo-data figure that does not say it is synthetic', () => {
-    expect(() => svgText(svgWith(PROFILE_CAUTION), { synthetic: true })).toThrow('The figure of demo data does not say it is synthetic; not exported.');
+    expect(() => svgText(svgWith(PROFILE_CAUTION), { synthetic: true })).toThrow(
+      'The figure of demo data does not say it is synthetic; not exported.',
+    );
     expect(svgText(svgWith(`${PROFILE_CAUTION} Synthetic demo data`), { synthetic: true })).toContain('Synthetic demo data');
   });
   it('makes file-safe names', () => {

@@ -30,7 +30,8 @@ export function svgText(svg: SVGSVGElement, options: FigureExportOptions = {}): 
   const copy = svg.cloneNode(true) as SVGSVGElement;
   copy.setAttribute('xmlns', 'http://www.w3.org/2000/svg');
   if (!copy.textContent?.includes(PROFILE_CAUTION)) throw new Error('The figure lost its caution line; not exported.');
-  if (options.synthetic && !copy.textContent.includes(SYNTHETIC_DATA_NOTE)) throw new Error('The figure of demo data does not say it is synthetic; not exported.');
+  if (options.synthetic && !copy.textContent.includes(SYNTHETIC_DATA_NOTE))
+    throw new Error('The figure of demo data does not say it is synthetic; not exported.');
   // Vue's scoped-style markers mean nothing outside the page.
   for (const el of [copy, ...Array.from(copy.querySelectorAll('*'))]) {
     for (const name of el.getAttributeNames()) if (name.startsWith('data-v-')) el.removeAttribute(name);

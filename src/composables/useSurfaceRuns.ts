@@ -40,7 +40,11 @@ export function useSurfaceRuns() {
     state.value = 'loading';
     error.value = null;
     try {
-      const [p, planned, runs] = await Promise.all([getProspect(teamId, prospectId), listPlannedWells(teamId), listSurfaces(teamId, prospectId)]);
+      const [p, planned, runs] = await Promise.all([
+        getProspect(teamId, prospectId),
+        listPlannedWells(teamId),
+        listSurfaces(teamId, prospectId),
+      ]);
       prospect.value = p;
       plannedWells.value = planned.filter((w) => w.prospectId === prospectId);
       list.value = runs;
@@ -105,5 +109,20 @@ export function useSurfaceRuns() {
     await refreshList(teamId, prospectId);
   }
 
-  return { prospect, plannedWells, list, state, error, current, currentState, currentError, plannedValues, load, refreshList, show, clear, remove };
+  return {
+    prospect,
+    plannedWells,
+    list,
+    state,
+    error,
+    current,
+    currentState,
+    currentError,
+    plannedValues,
+    load,
+    refreshList,
+    show,
+    clear,
+    remove,
+  };
 }

@@ -4,7 +4,15 @@ import { nextTick, ref } from 'vue';
 import { installFakeServer, jsonReply, TEAM_A, TEAM_B } from '@/testing/fakeServer';
 import { useTeamInvitations } from './useTeamInvitations';
 
-const inv = (id: string, email: string, expiresAt = '2026-12-09T10:00:00Z') => ({ id, email, name: 'N', role: 'viewer', invitedBy: 'Ada', createdAt: '2026-12-02T10:00:00Z', expiresAt });
+const inv = (id: string, email: string, expiresAt = '2026-12-09T10:00:00Z') => ({
+  id,
+  email,
+  name: 'N',
+  role: 'viewer',
+  invitedBy: 'Ada',
+  createdAt: '2026-12-02T10:00:00Z',
+  expiresAt,
+});
 const A1 = '3f1d2c4b-5a6e-4f70-8a9b-0c1d2e3f4a5b';
 const A2 = '9a8b7c6d-5e4f-4a3b-8c2d-1e0f9a8b7c6d';
 
@@ -29,7 +37,8 @@ describe('useTeamInvitations', () => {
   it('shows the current team only, whatever order the answers come in', async () => {
     let releaseA: () => void = () => {};
     installFakeServer({
-      [`GET /api/teams/${TEAM_A}/invitations`]: () => new Promise<Response>((r) => (releaseA = () => r(jsonReply(200, [inv(A1, 'old-team@example.org')])))),
+      [`GET /api/teams/${TEAM_A}/invitations`]: () =>
+        new Promise<Response>((r) => (releaseA = () => r(jsonReply(200, [inv(A1, 'old-team@example.org')])))),
       [`GET /api/teams/${TEAM_B}/invitations`]: () => jsonReply(200, [inv(A2, 'current@example.org')]),
     });
     const teamId = ref<string | null>(TEAM_A);

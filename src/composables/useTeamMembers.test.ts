@@ -4,8 +4,20 @@ import { nextTick, ref } from 'vue';
 import { errorReply, installFakeServer, jsonReply, TEAM_A, TEAM_B } from '@/testing/fakeServer';
 import { useTeamMembers } from './useTeamMembers';
 
-const ada = { userId: '0b6a3f0e-4a4b-4c1e-9d55-2f7c1c3c9a10', email: 'ada@example.org', name: 'Ada', role: 'admin', joinedAt: '2025-01-10T09:00:00Z' };
-const lin = { userId: '1b6a3f0e-4a4b-4c1e-9d55-2f7c1c3c9a11', email: 'lin@example.org', name: 'Lin', role: 'planner', joinedAt: '2025-02-01T09:00:00Z' };
+const ada = {
+  userId: '0b6a3f0e-4a4b-4c1e-9d55-2f7c1c3c9a10',
+  email: 'ada@example.org',
+  name: 'Ada',
+  role: 'admin',
+  joinedAt: '2025-01-10T09:00:00Z',
+};
+const lin = {
+  userId: '1b6a3f0e-4a4b-4c1e-9d55-2f7c1c3c9a11',
+  email: 'lin@example.org',
+  name: 'Lin',
+  role: 'planner',
+  joinedAt: '2025-02-01T09:00:00Z',
+};
 
 // Replies follow the contract: GET members → Member[], PATCH → Member, DELETE → 204.
 describe('useTeamMembers', () => {
@@ -46,8 +58,7 @@ describe('useTeamMembers', () => {
   it('keeps the list when the server refuses a change', async () => {
     installFakeServer({
       [`GET /api/teams/${TEAM_A}/members`]: () => jsonReply(200, [ada]),
-      [`PATCH /api/teams/${TEAM_A}/members/${ada.userId}`]: () =>
-        errorReply(409, 'last_admin', 'A team needs at least one admin.'),
+      [`PATCH /api/teams/${TEAM_A}/members/${ada.userId}`]: () => errorReply(409, 'last_admin', 'A team needs at least one admin.'),
     });
     const team = useTeamMembers(ref(TEAM_A));
     await vi.waitFor(() => expect(team.state.value).toBe('done'));

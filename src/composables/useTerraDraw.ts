@@ -84,7 +84,9 @@ export function useTerraDraw(map: ShallowRef<MapLibreMap | null>) {
     created.on('change', (ids) => {
       if (currentId === null) {
         // While drawing, the new polygon's id is the one terra-draw keeps changing.
-        const polygon = ids.map((id) => created.getSnapshotFeature(id)).find((f) => f?.geometry.type === 'Polygon' && f.properties.mode === 'polygon');
+        const polygon = ids
+          .map((id) => created.getSnapshotFeature(id))
+          .find((f) => f?.geometry.type === 'Polygon' && f.properties.mode === 'polygon');
         if (polygon?.id !== undefined && polygon.geometry.type === 'Polygon') {
           outline.value = closedPolygon(polygon.geometry.coordinates[0]);
         }

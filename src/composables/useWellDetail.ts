@@ -15,10 +15,12 @@ export type SaveOutcome = 'saved' | 'stale';
  * const outcome = await detail.save({ version: 3, status: 'abandoned' }); // 'saved' | 'stale'
  */
 export function useWellDetail(teamId: Ref<string | null>, wellId: Ref<string>) {
-  const need = <T>(task: (team: string, well: string) => Promise<T>) => () => {
-    if (!teamId.value) return Promise.reject(new Error('No team selected'));
-    return task(teamId.value, wellId.value);
-  };
+  const need =
+    <T>(task: (team: string, well: string) => Promise<T>) =>
+    () => {
+      if (!teamId.value) return Promise.reject(new Error('No team selected'));
+      return task(teamId.value, wellId.value);
+    };
   const well = useRequest<WellDetail>(need(wellsApi.getWell));
   const pressures = useRequest<PressureObservation[]>(need(wellsApi.listPressures));
   const logs = useRequest<LogCurveSummary[]>(need(wellsApi.listLogCurves));

@@ -2,13 +2,7 @@ import { computed, onScopeDispose, ref, watch, type Ref } from 'vue';
 import { useRoute, useRouter } from 'vue-router';
 import type { WellList } from '@shared/schemas/wells';
 import { listWells } from '@/api/wells';
-import {
-  isFiltered,
-  listParamsFromState,
-  routeFromState,
-  stateFromRoute,
-  type WellTableState,
-} from '@/components/well/wellTableState';
+import { isFiltered, listParamsFromState, routeFromState, stateFromRoute, type WellTableState } from '@/components/well/wellTableState';
 import { useRequest } from './useRequest';
 
 /** Typing pauses this long before the search goes to the server. */
@@ -86,5 +80,16 @@ export function useWellList(teamId: Ref<string | null>) {
     update({ q: '', status: [], pressuresOnly: false });
   }
 
-  return { state, searchText, wells, total, filtered, loadState: request.state, error: request.error, update, clearFilters, reload: request.run };
+  return {
+    state,
+    searchText,
+    wells,
+    total,
+    filtered,
+    loadState: request.state,
+    error: request.error,
+    update,
+    clearFilters,
+    reload: request.run,
+  };
 }

@@ -60,7 +60,9 @@ describe('atlasStyle', () => {
   it('labels only in faces the basemap declares, so no glyph server is ever asked', () => {
     const style = atlasStyle(input());
     const declared = Object.keys(style['font-faces'] ?? {});
-    const used = new Set(style.layers.flatMap((l) => ((l.layout as Record<string, unknown> | undefined)?.['text-font'] as string[] | undefined) ?? []));
+    const used = new Set(
+      style.layers.flatMap((l) => ((l.layout as Record<string, unknown> | undefined)?.['text-font'] as string[] | undefined) ?? []),
+    );
     expect(used.size).toBeGreaterThan(0);
     for (const face of used) expect(declared).toContain(face);
     expect(style.glyphs).toBeUndefined();

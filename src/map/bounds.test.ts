@@ -16,7 +16,11 @@ describe('boundsOfPoints', () => {
   });
 
   it('widens a single well to about ±5 km and skips impossible coordinates', () => {
-    const [w, s, e, n] = boundsOfPoints([{ lon: -101, lat: -32.5 }, { lon: Number.NaN, lat: 0 }, { lon: 200, lat: 0 }])!;
+    const [w, s, e, n] = boundsOfPoints([
+      { lon: -101, lat: -32.5 },
+      { lon: Number.NaN, lat: 0 },
+      { lon: 200, lat: 0 },
+    ])!;
     expect(w).toBeCloseTo(-101.045, 9);
     expect(e).toBeCloseTo(-100.955, 9);
     // 0.045° of latitude ≈ 5.0 km on the WGS 84 sphere turf uses (R = 6371.0088 km).
@@ -26,6 +30,13 @@ describe('boundsOfPoints', () => {
 
   it('gives null when there is nothing to frame', () => {
     expect(boundsOfPoints([])).toBeNull();
-    expect(boundsOfRing([[0, 0], [2, 0], [2, 1], [0, 0]])).toEqual([0, 0, 2, 1]);
+    expect(
+      boundsOfRing([
+        [0, 0],
+        [2, 0],
+        [2, 1],
+        [0, 0],
+      ]),
+    ).toEqual([0, 0, 2, 1]);
   });
 });

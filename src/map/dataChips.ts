@@ -28,9 +28,14 @@ export function dataChips(w: WellDataFacts, style: 'long' | 'short'): DataChip[]
   const short = style === 'short';
   const chips: DataChip[] = [];
   if (short ? w.pressureCount > 0 : true) {
-    chips.push({ key: 'pressures', label: short ? `P ${w.pressureCount}` : plural(w.pressureCount, 'pressure'), type: w.pressureCount > 0 ? 'info' : 'default' });
+    chips.push({
+      key: 'pressures',
+      label: short ? `P ${w.pressureCount}` : plural(w.pressureCount, 'pressure'),
+      type: w.pressureCount > 0 ? 'info' : 'default',
+    });
   }
-  if (short ? w.logCount > 0 : true) chips.push({ key: 'logs', label: short ? `Logs ${w.logCount}` : plural(w.logCount, 'log curve'), type: 'default' });
+  if (short ? w.logCount > 0 : true)
+    chips.push({ key: 'logs', label: short ? `Logs ${w.logCount}` : plural(w.logCount, 'log curve'), type: 'default' });
   if (w.hasLot) chips.push({ key: 'lot', label: 'LOT', type: 'info' });
   if (w.hasSurvey) chips.push({ key: 'survey', label: short ? 'Svy' : 'Survey', type: 'default' });
   if (!short && (w.topCount ?? 0) > 0) chips.push({ key: 'tops', label: `${w.topCount} tops`, type: 'default' });

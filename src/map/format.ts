@@ -9,7 +9,8 @@
  */
 export function formatDecimalDegrees(value: number, decimals = 5): string {
   if (!Number.isFinite(value)) throw new Error(`formatDecimalDegrees: value must be a finite number, got ${value}.`);
-  if (!Number.isInteger(decimals) || decimals < 0 || decimals > 10) throw new Error(`formatDecimalDegrees: decimals must be 0–10, got ${decimals}.`);
+  if (!Number.isInteger(decimals) || decimals < 0 || decimals > 10)
+    throw new Error(`formatDecimalDegrees: decimals must be 0–10, got ${decimals}.`);
   const text = value.toFixed(decimals);
   // -0.00000 would read as a hemisphere that is not there.
   return /^-0\.?0*$/.test(text) ? text.slice(1) : text;
@@ -30,7 +31,9 @@ export function formatDegreesMinutes(value: number, axis: 'lat' | 'lon', minuteD
   const totalMinutes = Math.round(Math.abs(value) * 60 * scale) / scale;
   const degrees = Math.floor(totalMinutes / 60 + 1e-12);
   const minutes = totalMinutes - degrees * 60;
-  return `${degrees}°${Math.max(0, minutes).toFixed(minuteDecimals).padStart(minuteDecimals + 3, '0')}′${hemisphere}`;
+  return `${degrees}°${Math.max(0, minutes)
+    .toFixed(minuteDecimals)
+    .padStart(minuteDecimals + 3, '0')}′${hemisphere}`;
 }
 
 /**

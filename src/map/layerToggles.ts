@@ -54,7 +54,8 @@ export function readReferenceToggles(stored: string | null): ReferenceToggles {
   }
   const result: ReferenceToggles = {};
   if (!parsed || typeof parsed !== 'object' || Array.isArray(parsed)) return result;
-  for (const [id, on] of Object.entries(parsed as Record<string, unknown>)) if (LAYER_ID.test(id) && typeof on === 'boolean') result[id] = on;
+  for (const [id, on] of Object.entries(parsed as Record<string, unknown>))
+    if (LAYER_ID.test(id) && typeof on === 'boolean') result[id] = on;
   return result;
 }
 

@@ -10,14 +10,23 @@ const f = (layer: string, properties: Record<string, unknown>, coordinates: numb
 
 describe('mapTargetOf', () => {
   it('prefers a planned well over the well and the prospect under it', () => {
-    const hits = [f(ATLAS_LAYERS.prospectFill, { id: 'p1' }), f(ATLAS_LAYERS.wells, { id: 'w1' }), f(ATLAS_LAYERS.plannedWells, { id: 'pw1' })];
+    const hits = [
+      f(ATLAS_LAYERS.prospectFill, { id: 'p1' }),
+      f(ATLAS_LAYERS.wells, { id: 'w1' }),
+      f(ATLAS_LAYERS.plannedWells, { id: 'pw1' }),
+    ];
     expect(mapTargetOf(hits)).toEqual({ kind: 'plannedWell', id: 'pw1' });
     expect(mapTargetOf(hits.slice(0, 2))).toEqual({ kind: 'well', id: 'w1' });
     expect(mapTargetOf(hits.slice(0, 1))).toEqual({ kind: 'prospect', id: 'p1' });
   });
 
   it('turns a cluster into a place to zoom to, and an offset ring into its well', () => {
-    expect(mapTargetOf([f(ATLAS_LAYERS.clusters, { cluster: true, count: 9 }, [-100.5, -32.1])])).toEqual({ kind: 'cluster', lon: -100.5, lat: -32.1, count: 9 });
+    expect(mapTargetOf([f(ATLAS_LAYERS.clusters, { cluster: true, count: 9 }, [-100.5, -32.1])])).toEqual({
+      kind: 'cluster',
+      lon: -100.5,
+      lat: -32.1,
+      count: 9,
+    });
     expect(mapTargetOf([f(ATLAS_LAYERS.offsetCandidates, { wellId: 'w7', kind: 'candidate' })])).toEqual({ kind: 'well', id: 'w7' });
   });
 

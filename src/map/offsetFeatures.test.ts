@@ -51,7 +51,13 @@ describe('offset highlight features', () => {
       ['b', 2, true],
     ]);
     const props = offsetFeatures(planned, marks).features.map((f) => f.properties);
-    expect(props.find((p) => p.kind === 'candidate' && p.wellId === 'b')).toEqual({ kind: 'candidate', wellId: 'b', name: 'W-b', rank: '2', picked: true });
+    expect(props.find((p) => p.kind === 'candidate' && p.wellId === 'b')).toEqual({
+      kind: 'candidate',
+      wellId: 'b',
+      name: 'W-b',
+      rank: '2',
+      picked: true,
+    });
   });
 
   it('places saved offsets from known wells, without ranks, and draws only points when no planned well is known', () => {

@@ -44,7 +44,13 @@ export function offsetFeatures(plannedLonLat: readonly [number, number] | null, 
       lines.push({
         type: 'Feature',
         properties: { kind: 'line', ...props },
-        geometry: { type: 'LineString', coordinates: [[plannedLonLat[0], plannedLonLat[1]], [m.lon, m.lat]] },
+        geometry: {
+          type: 'LineString',
+          coordinates: [
+            [plannedLonLat[0], plannedLonLat[1]],
+            [m.lon, m.lat],
+          ],
+        },
       });
     }
   }
@@ -64,10 +70,7 @@ export function candidateMarks(candidates: readonly OffsetCandidate[], picked: R
  * entries whose well is not known here are left out.
  * @example savedMarks(entries, new Map([[w.id, { lon: w.lon, lat: w.lat }]]))
  */
-export function savedMarks(
-  entries: readonly OffsetSetEntry[],
-  wellsById: ReadonlyMap<string, { lon: number; lat: number }>,
-): OffsetMark[] {
+export function savedMarks(entries: readonly OffsetSetEntry[], wellsById: ReadonlyMap<string, { lon: number; lat: number }>): OffsetMark[] {
   const marks: OffsetMark[] = [];
   for (const e of entries) {
     const w = wellsById.get(e.wellId);

@@ -11,7 +11,12 @@ import { geometryFamilies, REFERENCE_KIND_COLOURS, referenceLayerIds, referenceL
 
 const ORIGIN = 'http://127.0.0.1:8080';
 const TEAM = '5d2c1a9b-7f1e-4c3a-8b2d-1e0f9a8b7c6d';
-const BLOCKS = { id: '0b6a3f0e-4a4b-4c1e-9d55-2f7c1c3c9a10', kind: 'lease_blocks' as const, color: '#A0782C', geometryTypes: ['POLYGON', 'MULTIPOLYGON'] };
+const BLOCKS = {
+  id: '0b6a3f0e-4a4b-4c1e-9d55-2f7c1c3c9a10',
+  kind: 'lease_blocks' as const,
+  color: '#A0782C',
+  geometryTypes: ['POLYGON', 'MULTIPOLYGON'],
+};
 const FAULTS = { id: '7c1d2e3f-4a5b-4c6d-8e9f-0a1b2c3d4e5f', kind: 'faults' as const, color: '#A8461F', geometryTypes: ['LINESTRING'] };
 const WELLS = { id: '1a2b3c4d-5e6f-4a7b-8c9d-0e1f2a3b4c5d', kind: 'other' as const, color: '#6B7F99', geometryTypes: ['POINT'] };
 
@@ -63,7 +68,10 @@ describe('referenceLayerSpecs', () => {
     expect(passes(point, 1)).toBe(true);
     expect(passes(point, 2)).toBe(false);
     expect(passes(point, 3)).toBe(false);
-    expect(referenceLayerSpecs(WELLS, LIGHT_PALETTE, true).map((l) => l.id)).toEqual([referenceLayerIds(WELLS.id).point, referenceLayerIds(WELLS.id).pointLabel]);
+    expect(referenceLayerSpecs(WELLS, LIGHT_PALETTE, true).map((l) => l.id)).toEqual([
+      referenceLayerIds(WELLS.id).point,
+      referenceLayerIds(WELLS.id).pointLabel,
+    ]);
   });
 
   it('labels lines along the line, and draws only the families the layer holds', () => {
@@ -109,7 +117,9 @@ describe('atlasStyle with reference layers', () => {
   it('adds one team tile source per layer and draws them over the basemap, under the team layers', () => {
     const style = atlasStyle(input('light', { [FAULTS.id]: false }));
     const source = style.sources[referenceSourceId(BLOCKS.id)];
-    expect(source.type === 'vector' && source.tiles?.[0]).toBe(`${ORIGIN}/api/teams/${TEAM}/tiles/reference-${BLOCKS.id}/{z}/{x}/{y}.mvt?v=0`);
+    expect(source.type === 'vector' && source.tiles?.[0]).toBe(
+      `${ORIGIN}/api/teams/${TEAM}/tiles/reference-${BLOCKS.id}/{z}/{x}/{y}.mvt?v=0`,
+    );
     const order = style.layers.map((l) => l.id);
     expect(order.indexOf(referenceLayerIds(BLOCKS.id).fill)).toBeLessThan(order.indexOf(ATLAS_LAYERS.prospectFill));
     expect(order.indexOf(referenceLayerIds(BLOCKS.id).fill)).toBeGreaterThan(order.indexOf(basemapStyle(ORIGIN).layers.at(-1)!.id));

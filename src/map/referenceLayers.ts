@@ -93,8 +93,18 @@ export function referenceLayerIds(layerId: string) {
  * The vector source of one uploaded layer, from the team tile endpoint.
  * @example referenceSource('http://127.0.0.1:8080', teamId, layerId, 3).tiles[0] // '…/tiles/reference-<id>/{z}/{x}/{y}.mvt?v=3'
  */
-export function referenceSource(origin: string, teamId: string, layerId: string, tileVersion: number): SourceSpecification & { tiles: string[] } {
-  return { type: 'vector', tiles: [teamTileUrl(origin, teamId, referenceSourceId(layerId), tileVersion)], minzoom: 0, maxzoom: TEAM_TILES_MAX_ZOOM };
+export function referenceSource(
+  origin: string,
+  teamId: string,
+  layerId: string,
+  tileVersion: number,
+): SourceSpecification & { tiles: string[] } {
+  return {
+    type: 'vector',
+    tiles: [teamTileUrl(origin, teamId, referenceSourceId(layerId), tileVersion)],
+    minzoom: 0,
+    maxzoom: TEAM_TILES_MAX_ZOOM,
+  };
 }
 
 /**
@@ -104,7 +114,11 @@ export function referenceSource(origin: string, teamId: string, layerId: string,
  * layer holds are drawn; a switched-off layer stays in the style with `visibility: none`.
  * @example referenceLayerSpecs(layer, LIGHT_PALETTE, true).map((l) => l.type) // ['fill', 'line', 'symbol'] for lease blocks
  */
-export function referenceLayerSpecs(layer: Pick<ReferenceLayer, 'id' | 'kind' | 'color' | 'geometryTypes'>, c: AtlasPalette, visible: boolean): LayerSpecification[] {
+export function referenceLayerSpecs(
+  layer: Pick<ReferenceLayer, 'id' | 'kind' | 'color' | 'geometryTypes'>,
+  c: AtlasPalette,
+  visible: boolean,
+): LayerSpecification[] {
   const source = referenceSourceId(layer.id);
   const ids = referenceLayerIds(layer.id);
   const families = geometryFamilies(layer.geometryTypes);
@@ -116,7 +130,13 @@ export function referenceLayerSpecs(layer: Pick<ReferenceLayer, 'id' | 'kind' | 
 
   if (families.includes('polygon')) {
     out.push(
-      { ...common, id: ids.fill, type: 'fill', filter: isFamily('polygon'), paint: { 'fill-color': layer.color, 'fill-opacity': k.fillOpacity } },
+      {
+        ...common,
+        id: ids.fill,
+        type: 'fill',
+        filter: isFamily('polygon'),
+        paint: { 'fill-color': layer.color, 'fill-opacity': k.fillOpacity },
+      },
       {
         ...common,
         id: ids.outline,
@@ -143,7 +163,12 @@ export function referenceLayerSpecs(layer: Pick<ReferenceLayer, 'id' | 'kind' | 
       id: ids.point,
       type: 'circle',
       filter: isFamily('point'),
-      paint: { 'circle-radius': byZoom(5, 3.5, 12, 5.5), 'circle-color': layer.color, 'circle-stroke-color': c.wellStroke, 'circle-stroke-width': 1.2 },
+      paint: {
+        'circle-radius': byZoom(5, 3.5, 12, 5.5),
+        'circle-color': layer.color,
+        'circle-stroke-color': c.wellStroke,
+        'circle-stroke-width': 1.2,
+      },
     });
   }
   const label = { 'text-field': nameOf, 'text-font': [LABEL_FONT], 'text-optional': true };

@@ -3,7 +3,8 @@ import { DEPTH_RAMP, rampColour } from '@/plots/surfaceRamp';
 import { gridRange, gridToRgba } from './surfaceRaster';
 
 const colour = rampColour(DEPTH_RAMP);
-const pixel = (px: Uint8ClampedArray, nx: number, col: number, row: number) => Array.from(px.slice((row * nx + col) * 4, (row * nx + col) * 4 + 4));
+const pixel = (px: Uint8ClampedArray, nx: number, col: number, row: number) =>
+  Array.from(px.slice((row * nx + col) * 4, (row * nx + col) * 4 + 4));
 
 describe('gridToRgba', () => {
   // Grid rows go south → north; image rows go north → south (canvas ImageData, HTML spec).

@@ -16,7 +16,8 @@ export function gridToRgba(
   ramp: ColourRamp,
   alpha = 255,
 ): Uint8ClampedArray {
-  if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 1 || ny < 1) throw new Error(`Grid size must be positive integers, got ${nx} × ${ny}`);
+  if (!Number.isInteger(nx) || !Number.isInteger(ny) || nx < 1 || ny < 1)
+    throw new Error(`Grid size must be positive integers, got ${nx} × ${ny}`);
   if (values.length !== nx * ny) throw new Error(`Grid has ${values.length} values, expected nx × ny = ${nx * ny}`);
   const [lo, hi] = domain;
   if (!Number.isFinite(lo) || !Number.isFinite(hi)) throw new Error('Colour domain must be two finite numbers');

@@ -1,7 +1,16 @@
 import { validateStyleMin, type StyleSpecification } from '@maplibre/maplibre-gl-style-spec';
 import { describe, expect, it } from 'vitest';
 import type { Surface } from '@shared/schemas/surfaces';
-import { SURFACE_LAYERS, SURFACE_SOURCES, contourFeatures, imageCoordinates, plannedFeatures, residualLimit, surfaceStyle, wellFeatures } from './surfaceStyle';
+import {
+  SURFACE_LAYERS,
+  SURFACE_SOURCES,
+  contourFeatures,
+  imageCoordinates,
+  plannedFeatures,
+  residualLimit,
+  surfaceStyle,
+  wellFeatures,
+} from './surfaceStyle';
 
 const base: StyleSpecification = {
   version: 8,
@@ -18,7 +27,19 @@ const contours: Surface['contours'] = {
     {
       type: 'Feature',
       properties: { value: 2450, label: '2450 m' },
-      geometry: { type: 'MultiPolygon', coordinates: [[[[0, 0], [1, 0], [1, 1], [0, 0]]]] },
+      geometry: {
+        type: 'MultiPolygon',
+        coordinates: [
+          [
+            [
+              [0, 0],
+              [1, 0],
+              [1, 1],
+              [0, 0],
+            ],
+          ],
+        ],
+      },
     },
   ],
 };
@@ -63,10 +84,38 @@ describe('surfaceStyle', () => {
   const style = surfaceStyle({
     base,
     theme: 'light',
-    raster: { cornersLonLat: [[0, 0], [1, 0], [1, 1], [0, 1]] },
+    raster: {
+      cornersLonLat: [
+        [0, 0],
+        [1, 0],
+        [1, 1],
+        [0, 1],
+      ],
+    },
     contours: contourFeatures(contours, (m) => `${m} m`),
-    outline: { type: 'Polygon', coordinates: [[[0, 0], [1, 0], [1, 1], [0, 0]]] },
-    wells: wellFeatures([{ wellId: '00000000-0000-4000-8000-000000000000', name: 'AV-1', lon: 0.5, lat: 0.5, value: 2400, interpretationVersion: 1, residual: 12, predicted: 2412 }]),
+    outline: {
+      type: 'Polygon',
+      coordinates: [
+        [
+          [0, 0],
+          [1, 0],
+          [1, 1],
+          [0, 0],
+        ],
+      ],
+    },
+    wells: wellFeatures([
+      {
+        wellId: '00000000-0000-4000-8000-000000000000',
+        name: 'AV-1',
+        lon: 0.5,
+        lat: 0.5,
+        value: 2400,
+        interpretationVersion: 1,
+        residual: 12,
+        predicted: 2412,
+      },
+    ]),
     planned: plannedFeatures([{ name: 'AV-9 (planned)', location: { type: 'Point', coordinates: [0.4, 0.6] } }]),
     residualLimitM: 50,
   });

@@ -6,7 +6,13 @@ import { LABEL_FONT, LABEL_FONT_STRONG } from './atlasLayers';
 import { RESIDUAL_RAMP } from '@/plots/surfaceRamp';
 
 /** Source and layer ids of the surface screen, bottom to top. The browser test queries them. */
-export const SURFACE_SOURCES = { raster: 'surface-raster', contours: 'surface-contours', outline: 'surface-prospect', wells: 'surface-wells', planned: 'surface-planned' } as const;
+export const SURFACE_SOURCES = {
+  raster: 'surface-raster',
+  contours: 'surface-contours',
+  outline: 'surface-prospect',
+  wells: 'surface-wells',
+  planned: 'surface-planned',
+} as const;
 export const SURFACE_LAYERS = {
   raster: 'surface-raster',
   contourLines: 'surface-contour-lines',
@@ -50,7 +56,11 @@ export function contourFeatures(contours: Surface['contours'], label: (valueM: n
 export function wellFeatures(wells: Surface['wells']): FeatureCollection<Point, { name: string; residual: number | null }> {
   return {
     type: 'FeatureCollection',
-    features: wells.map((w) => ({ type: 'Feature', geometry: { type: 'Point', coordinates: [w.lon, w.lat] }, properties: { name: w.name, residual: w.residual } })),
+    features: wells.map((w) => ({
+      type: 'Feature',
+      geometry: { type: 'Point', coordinates: [w.lon, w.lat] },
+      properties: { name: w.name, residual: w.residual },
+    })),
   };
 }
 
@@ -59,7 +69,10 @@ export function wellFeatures(wells: Surface['wells']): FeatureCollection<Point, 
  * @example plannedFeatures([{ name: 'Ostrel Ridge-1 (planned)', location: { type: 'Point', coordinates: [-101.3, -32.6] } }]).features.length // 1
  */
 export function plannedFeatures(planned: readonly { name: string; location: Point }[]): FeatureCollection<Point, { name: string }> {
-  return { type: 'FeatureCollection', features: planned.map((w) => ({ type: 'Feature', geometry: w.location, properties: { name: w.name } })) };
+  return {
+    type: 'FeatureCollection',
+    features: planned.map((w) => ({ type: 'Feature', geometry: w.location, properties: { name: w.name } })),
+  };
 }
 
 /**
@@ -94,7 +107,10 @@ export interface SurfaceStyleInput {
   residualLimitM: number;
 }
 
-const INK = { light: { text: '#1B262C', halo: '#F6F8F9', contour: '#1B262C', outline: '#B0306A' }, dark: { text: '#EEF2F4', halo: '#121A1E', contour: '#F1F4F5', outline: '#F08BB0' } };
+const INK = {
+  light: { text: '#1B262C', halo: '#F6F8F9', contour: '#1B262C', outline: '#B0306A' },
+  dark: { text: '#EEF2F4', halo: '#121A1E', contour: '#F1F4F5', outline: '#F08BB0' },
+};
 
 /**
  * The whole map style of the surface screen: the basemap, then the coloured grid, contours, the prospect
@@ -108,14 +124,22 @@ export function surfaceStyle(input: SurfaceStyleInput): StyleSpecification {
   const sources: StyleSpecification['sources'] = {
     ...input.base.sources,
     [SURFACE_SOURCES.contours]: { type: 'geojson', data: input.contours ?? EMPTY },
-    [SURFACE_SOURCES.outline]: { type: 'geojson', data: input.outline ? { type: 'Feature', geometry: input.outline, properties: {} } : EMPTY },
+    [SURFACE_SOURCES.outline]: {
+      type: 'geojson',
+      data: input.outline ? { type: 'Feature', geometry: input.outline, properties: {} } : EMPTY,
+    },
     [SURFACE_SOURCES.wells]: { type: 'geojson', data: input.wells ?? EMPTY },
     [SURFACE_SOURCES.planned]: { type: 'geojson', data: input.planned ?? EMPTY },
   };
   const layers: LayerSpecification[] = [];
   if (input.raster) {
     sources[SURFACE_SOURCES.raster] = { type: 'image', coordinates: imageCoordinates(input.raster.cornersLonLat) };
-    layers.push({ id: SURFACE_LAYERS.raster, type: 'raster', source: SURFACE_SOURCES.raster, paint: { 'raster-opacity': 0.82, 'raster-fade-duration': 0 } });
+    layers.push({
+      id: SURFACE_LAYERS.raster,
+      type: 'raster',
+      source: SURFACE_SOURCES.raster,
+      paint: { 'raster-opacity': 0.82, 'raster-fade-duration': 0 },
+    });
   }
   const lim = input.residualLimitM;
   const residualColour: ExpressionSpecification = [
@@ -125,15 +149,32 @@ export function surfaceStyle(input: SurfaceStyleInput): StyleSpecification {
     ['interpolate', ['linear'], ['get', 'residual'], -lim, RESIDUAL_RAMP[0][1], 0, RESIDUAL_RAMP[1][1], lim, RESIDUAL_RAMP[2][1]],
   ];
   layers.push(
-    { id: SURFACE_LAYERS.contourLines, type: 'line', source: SURFACE_SOURCES.contours, paint: { 'line-color': ink.contour, 'line-opacity': 0.7, 'line-width': 1 } },
+    {
+      id: SURFACE_LAYERS.contourLines,
+      type: 'line',
+      source: SURFACE_SOURCES.contours,
+      paint: { 'line-color': ink.contour, 'line-opacity': 0.7, 'line-width': 1 },
+    },
     {
       id: SURFACE_LAYERS.contourLabels,
       type: 'symbol',
       source: SURFACE_SOURCES.contours,
-      layout: { 'symbol-placement': 'line', 'symbol-spacing': 280, 'text-field': ['get', 'text'], 'text-font': [LABEL_FONT], 'text-size': 11, 'text-max-angle': 35 },
+      layout: {
+        'symbol-placement': 'line',
+        'symbol-spacing': 280,
+        'text-field': ['get', 'text'],
+        'text-font': [LABEL_FONT],
+        'text-size': 11,
+        'text-max-angle': 35,
+      },
       paint: { 'text-color': ink.text, 'text-halo-color': ink.halo, 'text-halo-width': 1.6 },
     },
-    { id: SURFACE_LAYERS.outline, type: 'line', source: SURFACE_SOURCES.outline, paint: { 'line-color': ink.outline, 'line-width': 2.5, 'line-dasharray': [3, 2] } },
+    {
+      id: SURFACE_LAYERS.outline,
+      type: 'line',
+      source: SURFACE_SOURCES.outline,
+      paint: { 'line-color': ink.outline, 'line-width': 2.5, 'line-dasharray': [3, 2] },
+    },
     {
       id: SURFACE_LAYERS.wells,
       type: 'circle',
@@ -145,7 +186,14 @@ export function surfaceStyle(input: SurfaceStyleInput): StyleSpecification {
       type: 'symbol',
       source: SURFACE_SOURCES.wells,
       minzoom: 8,
-      layout: { 'text-field': ['get', 'name'], 'text-font': [LABEL_FONT_STRONG], 'text-size': 11, 'text-offset': [0, 1.1], 'text-anchor': 'top', 'text-optional': true },
+      layout: {
+        'text-field': ['get', 'name'],
+        'text-font': [LABEL_FONT_STRONG],
+        'text-size': 11,
+        'text-offset': [0, 1.1],
+        'text-anchor': 'top',
+        'text-optional': true,
+      },
       paint: { 'text-color': ink.text, 'text-halo-color': ink.halo, 'text-halo-width': 1.6 },
     },
     // Planned wells as a ring with a dot in the outline's colour, as on the Atlas, always labelled.
@@ -159,7 +207,13 @@ export function surfaceStyle(input: SurfaceStyleInput): StyleSpecification {
       id: SURFACE_LAYERS.plannedLabels,
       type: 'symbol',
       source: SURFACE_SOURCES.planned,
-      layout: { 'text-field': ['get', 'name'], 'text-font': [LABEL_FONT_STRONG], 'text-size': 11.5, 'text-offset': [0, 1.2], 'text-anchor': 'top' },
+      layout: {
+        'text-field': ['get', 'name'],
+        'text-font': [LABEL_FONT_STRONG],
+        'text-size': 11.5,
+        'text-offset': [0, 1.2],
+        'text-anchor': 'top',
+      },
       paint: { 'text-color': ink.outline, 'text-halo-color': ink.halo, 'text-halo-width': 1.8 },
     },
   );

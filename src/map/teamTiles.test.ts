@@ -8,7 +8,9 @@ describe('teamTileUrl', () => {
     expect(parsed.origin).toBe('http://127.0.0.1:8080');
     expect(parsed.pathname).toBe('/api/teams/team%201/tiles/planned-wells/3/2/1.mvt');
     expect(parsed.searchParams.get('v')).toBe('4');
-    expect(() => teamTileUrl('/relative', 't', 'wells', 0)).toThrow('teamTileUrl: origin must look like http://host:port, got "/relative".');
+    expect(() => teamTileUrl('/relative', 't', 'wells', 0)).toThrow(
+      'teamTileUrl: origin must look like http://host:port, got "/relative".',
+    );
     expect(() => teamTileUrl('http://x', 't', 'wells', -1)).toThrow('teamTileUrl: version must be a whole number ≥ 0, got -1.');
   });
 });

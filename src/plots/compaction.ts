@@ -34,7 +34,9 @@ export function formatYears(years: number): string {
 export function compactionReading(screen: Pick<CompactionScreen, 'tauYears' | 'burialYears' | 'verdict'>): string {
   const drain = formatYears(screen.tauYears);
   const burial = formatYears(screen.burialYears);
-  if (screen.verdict === 'likely-retained') return `The layer drains in ${drain} but was buried over ${burial}: burial outpaced drainage, so pressure is likely retained.`;
-  if (screen.verdict === 'likely-drained') return `The layer drains in ${drain} but was buried over ${burial}: pressure likely bled off as it was buried (near hydrostatic).`;
+  if (screen.verdict === 'likely-retained')
+    return `The layer drains in ${drain} but was buried over ${burial}: burial outpaced drainage, so pressure is likely retained.`;
+  if (screen.verdict === 'likely-drained')
+    return `The layer drains in ${drain} but was buried over ${burial}: pressure likely bled off as it was buried (near hydrostatic).`;
   return `The layer drains in ${drain} and was buried over ${burial}: the two are comparable, so some excess pressure may be retained.`;
 }

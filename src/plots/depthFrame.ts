@@ -65,7 +65,12 @@ export function depthAxisLabel(frame: DepthFrame): string {
  * survey), else the TVD from the frame's datum; in the frame's unit.
  * @example depthOfTvd(2000, { tvdM: [0, 2000], mdM: [0, 2100] }, { mode: 'md', datum: 'rt', unit: 'm' }, datums); // 2100
  */
-export function depthOfTvd(tvdM: number, grid: { tvdM: ArrayLike<number>; mdM: ArrayLike<number> }, frame: DepthFrame, datums: WellDatums): number {
+export function depthOfTvd(
+  tvdM: number,
+  grid: { tvdM: ArrayLike<number>; mdM: ArrayLike<number> },
+  frame: DepthFrame,
+  datums: WellDatums,
+): number {
   const mdM = frame.mode === 'md' ? interpolateAt(grid.tvdM, grid.mdM, tvdM) : tvdM;
   return displayDepth(tvdM, mdM, frame, datums);
 }

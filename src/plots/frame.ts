@@ -101,7 +101,10 @@ export function trackDomain(key: TrackKey, values: ArrayLike<number> | undefined
  * A value domain that holds every finite value given, padded and rounded to nice ticks.
  * @example valueDomain([[0, 10.3], [2, 12]]); // [0, 13]
  */
-export function valueDomain(series: readonly ArrayLike<number>[], opts: { padFraction?: number; floorAtZero?: boolean } = {}): [number, number] {
+export function valueDomain(
+  series: readonly ArrayLike<number>[],
+  opts: { padFraction?: number; floorAtZero?: boolean } = {},
+): [number, number] {
   let min = Infinity;
   let max = -Infinity;
   for (const s of series) {
@@ -115,7 +118,10 @@ export function valueDomain(series: readonly ArrayLike<number>[], opts: { padFra
   if (min === Infinity) return [0, 1];
   const pad = (max - min || Math.abs(max) || 1) * (opts.padFraction ?? 0.03);
   const lo = opts.floorAtZero ? 0 : min - pad;
-  const [a, b] = scaleLinear().domain([lo, max + pad]).nice(8).domain();
+  const [a, b] = scaleLinear()
+    .domain([lo, max + pad])
+    .nice(8)
+    .domain();
   return [a, b];
 }
 
@@ -123,7 +129,13 @@ export function valueDomain(series: readonly ArrayLike<number>[], opts: { padFra
  * Zooms a depth domain about `centre` by `factor` (< 1 zooms in), kept inside `limits` and no thinner than `minSpan`.
  * @example zoomDomain([0, 4000], 2000, 0.5, [0, 4000]); // [1000, 3000]
  */
-export function zoomDomain(domain: [number, number], centre: number, factor: number, limits: [number, number], minSpan = 20): [number, number] {
+export function zoomDomain(
+  domain: [number, number],
+  centre: number,
+  factor: number,
+  limits: [number, number],
+  minSpan = 20,
+): [number, number] {
   const span = Math.min(limits[1] - limits[0], Math.max(minSpan, (domain[1] - domain[0]) * factor));
   const w = (centre - domain[0]) / (domain[1] - domain[0] || 1);
   return clampDomain([centre - w * span, centre - w * span + span], limits);

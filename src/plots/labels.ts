@@ -48,7 +48,13 @@ export function staggerLabels(wanted: readonly number[], height: number, min = -
  * Returns the label's anchor point and SVG text-anchor.
  * @example clearSpot([880], 400, 900, 70); // { x: 406, anchor: 'start' } (a curve crosses the right end)
  */
-export function clearSpot(curveXs: readonly number[], x0: number, x1: number, width: number, pad = 6): { x: number; anchor: 'start' | 'end' | 'middle' } {
+export function clearSpot(
+  curveXs: readonly number[],
+  x0: number,
+  x1: number,
+  width: number,
+  pad = 6,
+): { x: number; anchor: 'start' | 'end' | 'middle' } {
   const xs = curveXs.filter((v) => Number.isFinite(v) && v >= x0 && v <= x1).sort((a, b) => a - b);
   const free = (a: number, b: number) => xs.every((v) => v < a - 3 || v > b + 3);
   if (free(x1 - pad - width, x1 - pad)) return { x: x1 - pad, anchor: 'end' };

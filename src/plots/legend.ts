@@ -40,7 +40,14 @@ export interface PlacedEntry<E extends LegendEntry> {
  * Stacks entries top-down with their wrapped lines, `lineHeight` apart and `gap` between entries.
  * @example stackLegend([{ key: 'a', label: 'Pore pressure' }], 150, 11, 18)[0].y; // 18
  */
-export function stackLegend<E extends LegendEntry>(entries: readonly E[], widthPx: number, fontPx: number, top: number, lineHeight = 14, gap = 6): PlacedEntry<E>[] {
+export function stackLegend<E extends LegendEntry>(
+  entries: readonly E[],
+  widthPx: number,
+  fontPx: number,
+  top: number,
+  lineHeight = 14,
+  gap = 6,
+): PlacedEntry<E>[] {
   const max = charsThatFit(widthPx, fontPx);
   let y = top;
   return entries.map((entry) => {

@@ -15,7 +15,16 @@ export interface ObservationMark {
 }
 
 /** Drawing order: events under tests, so good tests stay on top and readable. */
-const ORDER: Record<Exclude<PressureKind, 'mud_weight'>, number> = { other: 0, pp_estimate: 1, loss: 2, kick: 3, fit: 4, lot: 5, dst: 6, formation_test: 7 };
+const ORDER: Record<Exclude<PressureKind, 'mud_weight'>, number> = {
+  other: 0,
+  pp_estimate: 1,
+  loss: 2,
+  kick: 3,
+  fit: 4,
+  lot: 5,
+  dst: 6,
+  formation_test: 7,
+};
 
 /**
  * The point observations of a well (everything but mud weights, which are drawn as a line), with their marks,

@@ -33,7 +33,18 @@ describe('series builders', () => {
 
   it('paths break at NaN', () => {
     const s = scaleLinear().domain([0, 10]).range([0, 100]);
-    expect(pathOf([[1, 1], [2, 2], [NaN, 3], [4, 4]], s, s)).toBe('M10,10L20,20M40,40Z');
+    expect(
+      pathOf(
+        [
+          [1, 1],
+          [2, 2],
+          [NaN, 3],
+          [4, 4],
+        ],
+        s,
+        s,
+      ),
+    ).toBe('M10,10L20,20M40,40Z');
   });
 });
 
@@ -71,7 +82,11 @@ describe('scales and zoom', () => {
 
 describe('legend and marks', () => {
   it('wraps at spaces', () => {
-    expect(wrapLabel('Formation test (tight, supercharged or doubtful)', 22)).toEqual(['Formation test (tight,', 'supercharged or', 'doubtful)']);
+    expect(wrapLabel('Formation test (tight, supercharged or doubtful)', 22)).toEqual([
+      'Formation test (tight,',
+      'supercharged or',
+      'doubtful)',
+    ]);
   });
   it('good tests are filled, others and FITs hollow', () => {
     expect(markStyle('formation_test', 'good').hollow).toBe(false);

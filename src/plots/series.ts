@@ -76,7 +76,10 @@ export interface MudVertex {
  * to `baseTvdM`), so the line has two vertices per report. Pressure of a vertex is kgM3·g·TVD.
  * @example mudWeightSteps([{ kind: 'mud_weight', tvdM: 1000, mdM: 1000, valueSi: 1100 * 9.80665 * 1000 } …], 3000);
  */
-export function mudWeightSteps(observations: readonly Pick<PressureObservation, 'kind' | 'tvdM' | 'mdM' | 'valueSi'>[], baseTvdM: number): MudVertex[] {
+export function mudWeightSteps(
+  observations: readonly Pick<PressureObservation, 'kind' | 'tvdM' | 'mdM' | 'valueSi'>[],
+  baseTvdM: number,
+): MudVertex[] {
   const mud = observations.filter((o) => o.kind === 'mud_weight' && o.tvdM > 0).sort((a, b) => a.tvdM - b.tvdM);
   const out: MudVertex[] = [];
   mud.forEach((o, i) => {

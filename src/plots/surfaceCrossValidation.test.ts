@@ -31,7 +31,12 @@ describe('crossValidationPoints', () => {
 
 describe('oneToOneDomain', () => {
   it('spans both axes with 5 % padding', () => {
-    expect(oneToOneDomain([{ observed: 2000, predicted: 2100 }, { observed: 2200, predicted: 2150 }])).toEqual([1990, 2210]);
+    expect(
+      oneToOneDomain([
+        { observed: 2000, predicted: 2100 },
+        { observed: 2200, predicted: 2150 },
+      ]),
+    ).toEqual([1990, 2210]);
   });
 });
 

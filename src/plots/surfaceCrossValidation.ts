@@ -17,14 +17,22 @@ export function crossValidationPoints(wells: Surface['wells'], factor = 1): Cros
   if (!Number.isFinite(factor) || factor <= 0) throw new Error(`factor must be a positive number, got ${factor}`);
   return wells
     .filter((w) => w.predicted !== null)
-    .map((w) => ({ name: w.name, observed: w.value * factor, predicted: (w.predicted as number) * factor, residual: ((w.predicted as number) - w.value) * factor }));
+    .map((w) => ({
+      name: w.name,
+      observed: w.value * factor,
+      predicted: (w.predicted as number) * factor,
+      residual: ((w.predicted as number) - w.value) * factor,
+    }));
 }
 
 /**
  * One domain for both axes so the 1:1 line is the diagonal, padded by `padFraction` of the span.
  * @example oneToOneDomain([{ observed: 2000, predicted: 2100 }, { observed: 2200, predicted: 2150 }], 0.05) // [1990, 2210]
  */
-export function oneToOneDomain(points: readonly Pick<CrossValidationPoint, 'observed' | 'predicted'>[], padFraction = 0.05): [number, number] {
+export function oneToOneDomain(
+  points: readonly Pick<CrossValidationPoint, 'observed' | 'predicted'>[],
+  padFraction = 0.05,
+): [number, number] {
   if (points.length === 0) return [0, 1];
   const all = points.flatMap((p) => [p.observed, p.predicted]);
   const lo = Math.min(...all);

@@ -24,7 +24,12 @@ describe('rampColour', () => {
   });
 
   it('refuses a ramp whose stops are out of order', () => {
-    expect(() => rampColour([[0.5, '#000'], [0.2, '#fff']])).toThrow('Colour ramp stops must be in increasing order');
+    expect(() =>
+      rampColour([
+        [0.5, '#000'],
+        [0.2, '#fff'],
+      ]),
+    ).toThrow('Colour ramp stops must be in increasing order');
   });
 });
 

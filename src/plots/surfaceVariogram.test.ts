@@ -19,7 +19,9 @@ describe('variogramCurve', () => {
   });
 
   it('refuses a non-positive lag span', () => {
-    expect(() => variogramCurve({ model: 'gaussian', nugget: 0, sill: 1, range: 1 }, 0)).toThrow('maxLagM must be a positive distance, got 0');
+    expect(() => variogramCurve({ model: 'gaussian', nugget: 0, sill: 1, range: 1 }, 0)).toThrow(
+      'maxLagM must be a positive distance, got 0',
+    );
   });
 });
 
@@ -41,19 +43,47 @@ describe('experimentalMarks', () => {
 
 describe('variogramMaxLagM', () => {
   it('stops at twice the last lag when the range lies far beyond the data', () => {
-    expect(variogramMaxLagM({ model: { model: 'spherical', nugget: 0, sill: 1, range: 100_000 }, experimental: [{ lagM: 25_000, gamma: 1, pairs: 3 }], fitted: true })).toBeCloseTo(55_000, 6);
+    expect(
+      variogramMaxLagM({
+        model: { model: 'spherical', nugget: 0, sill: 1, range: 100_000 },
+        experimental: [{ lagM: 25_000, gamma: 1, pairs: 3 }],
+        fitted: true,
+      }),
+    ).toBeCloseTo(55_000, 6);
   });
 
   it('reaches 10 % past the longer of the last lag and the range', () => {
-    expect(variogramMaxLagM({ model: { model: 'spherical', nugget: 0, sill: 1, range: 9000 }, experimental: [{ lagM: 12_000, gamma: 1, pairs: 3 }], fitted: true })).toBeCloseTo(13_200, 6);
+    expect(
+      variogramMaxLagM({
+        model: { model: 'spherical', nugget: 0, sill: 1, range: 9000 },
+        experimental: [{ lagM: 12_000, gamma: 1, pairs: 3 }],
+        fitted: true,
+      }),
+    ).toBeCloseTo(13_200, 6);
   });
 });
 
 describe('risesPastSill', () => {
   const base = { model: { model: 'spherical' as const, nugget: 0, sill: 100, range: 10_000 }, fitted: true };
   it('flags experimental points well above the total sill past the range, and nothing else', () => {
-    expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 80, pairs: 20 }, { lagM: 15_000, gamma: 450, pairs: 30 }] })).toBe(true);
-    expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 80, pairs: 20 }, { lagM: 15_000, gamma: 110, pairs: 30 }] })).toBe(false);
+    expect(
+      risesPastSill({
+        ...base,
+        experimental: [
+          { lagM: 5000, gamma: 80, pairs: 20 },
+          { lagM: 15_000, gamma: 450, pairs: 30 },
+        ],
+      }),
+    ).toBe(true);
+    expect(
+      risesPastSill({
+        ...base,
+        experimental: [
+          { lagM: 5000, gamma: 80, pairs: 20 },
+          { lagM: 15_000, gamma: 110, pairs: 30 },
+        ],
+      }),
+    ).toBe(false);
     expect(risesPastSill({ ...base, experimental: [{ lagM: 5000, gamma: 90, pairs: 20 }] })).toBe(false);
     // The fit bounds the range at the last lag: then the outer third of the lags is read (an EMW run looked like this).
     const bounded = { ...base, model: { ...base.model, sill: 0.0116, range: 30_000 } };

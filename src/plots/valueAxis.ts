@@ -48,7 +48,16 @@ export function valueAxisLabel(view: PressureView, units: ValueUnits): string {
   return `${gradient ? 'Pressure gradient' : 'Equivalent mud weight'} from rotary table (${EMW_UNIT_LABELS[units.emw]})`;
 }
 
-const DIGITS: Record<DisplayEmwUnit | DisplayPressureUnit, number> = { sg: 3, ppg: 2, 'kPa/m': 2, 'psi/ft': 3, MPa: 2, bar: 1, psi: 0, kPa: 0 };
+const DIGITS: Record<DisplayEmwUnit | DisplayPressureUnit, number> = {
+  sg: 3,
+  ppg: 2,
+  'kPa/m': 2,
+  'psi/ft': 3,
+  MPa: 2,
+  bar: 1,
+  psi: 0,
+  kPa: 0,
+};
 
 /**
  * A value of the current view for the hover read-out, with its unit.

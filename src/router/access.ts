@@ -46,9 +46,7 @@ export function decideAccess(to: AccessTarget, ctx: AccessContext): true | Route
     return true;
   }
   if (!ctx.signedIn) {
-    return to.fullPath === '/' || to.fullPath === HOME_PATH
-      ? { path: SIGN_IN_PATH }
-      : { path: SIGN_IN_PATH, query: { next: to.fullPath } };
+    return to.fullPath === '/' || to.fullPath === HOME_PATH ? { path: SIGN_IN_PATH } : { path: SIGN_IN_PATH, query: { next: to.fullPath } };
   }
   if (to.meta.action && !ctx.can(to.meta.action)) {
     return { path: NOT_PERMITTED_PATH, query: { from: to.fullPath } };

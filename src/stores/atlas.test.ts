@@ -24,30 +24,94 @@ const P1 = '44444444-4444-4444-8444-444444444444';
 
 const well = (id: string, name: string, lon: number, lat: number): WellSummary =>
   wellSummarySchema.parse({
-    id, name, uwi: null, operator: null, lon, lat, status: 'drilled', offshore: true, waterDepthM: 100, tdMdM: 3000, tdTvdM: 3000,
-    spudDate: null, pressureCount: 2, logCount: 1, hasSurvey: false, hasLot: false, updatedAt: '2026-01-01T00:00:00Z',
+    id,
+    name,
+    uwi: null,
+    operator: null,
+    lon,
+    lat,
+    status: 'drilled',
+    offshore: true,
+    waterDepthM: 100,
+    tdMdM: 3000,
+    tdTvdM: 3000,
+    spudDate: null,
+    pressureCount: 2,
+    logCount: 1,
+    hasSurvey: false,
+    hasLot: false,
+    updatedAt: '2026-01-01T00:00:00Z',
   });
 const planned: PlannedWell = plannedWellSchema.parse({
-  id: PW, name: 'Ostrel-3', location: { type: 'Point', coordinates: [-101, -32.5] }, prospectId: P1, datumElevationM: 25,
-  waterDepthM: 110, waterDepthSource: 'nearest-wells', plannedTdM: 3200, notes: null, version: 1, updatedAt: '2026-01-01T00:00:00Z',
+  id: PW,
+  name: 'Ostrel-3',
+  location: { type: 'Point', coordinates: [-101, -32.5] },
+  prospectId: P1,
+  datumElevationM: 25,
+  waterDepthM: 110,
+  waterDepthSource: 'nearest-wells',
+  plannedTdM: 3200,
+  notes: null,
+  version: 1,
+  updatedAt: '2026-01-01T00:00:00Z',
 });
 const prospect: Prospect = prospectSchema.parse({
-  id: P1, name: 'Ostrel Ridge', geometry: { type: 'Polygon', coordinates: [[[-101.1, -32.6], [-100.9, -32.6], [-100.9, -32.4], [-101.1, -32.6]]] },
-  areaKm2: 200, targetTopM: 2300, targetBaseM: 3100, notes: null, version: 1, createdBy: null, updatedAt: '2026-01-01T00:00:00Z',
+  id: P1,
+  name: 'Ostrel Ridge',
+  geometry: {
+    type: 'Polygon',
+    coordinates: [
+      [
+        [-101.1, -32.6],
+        [-100.9, -32.6],
+        [-100.9, -32.4],
+        [-101.1, -32.6],
+      ],
+    ],
+  },
+  areaKm2: 200,
+  targetTopM: 2300,
+  targetBaseM: 3100,
+  notes: null,
+  version: 1,
+  createdBy: null,
+  updatedAt: '2026-01-01T00:00:00Z',
 });
 const candidate = (w: WellSummary, score: number): OffsetCandidate =>
   offsetCandidateSchema.parse({
-    wellId: w.id, name: w.name, uwi: null, status: 'drilled', lon: w.lon, lat: w.lat, distanceKm: 5, azimuthDeg: 45, waterDepthM: 100,
-    waterDepthDiffM: -10, tdTvdM: 3000, tdCoverage: 0.94, pressureCount: 2, logCount: 1, hasLot: false, hasSurvey: false,
-    topTvdssM: null, inOffsetSet: false, score,
+    wellId: w.id,
+    name: w.name,
+    uwi: null,
+    status: 'drilled',
+    lon: w.lon,
+    lat: w.lat,
+    distanceKm: 5,
+    azimuthDeg: 45,
+    waterDepthM: 100,
+    waterDepthDiffM: -10,
+    tdTvdM: 3000,
+    tdCoverage: 0.94,
+    pressureCount: 2,
+    logCount: 1,
+    hasLot: false,
+    hasSurvey: false,
+    topTvdssM: null,
+    inOffsetSet: false,
+    score,
   });
 const entry = (w: WellSummary, reason: string | null): OffsetSetEntry =>
   offsetSetEntrySchema.parse({ wellId: w.id, name: w.name, reason, addedBy: null, addedByName: 'Priya', addedAt: '2026-01-02T00:00:00Z' });
 
 const L1 = '55555555-5555-4555-8555-555555555555';
 const blocks = referenceLayerSchema.parse({
-  id: L1, name: 'Blocks', kind: 'lease_blocks', color: '#A0782C', featureCount: 2, geometryTypes: ['POLYGON'],
-  bbox: [-101, -32.6, -100.8, -32.5], createdAt: '2026-01-01T00:00:00.000Z',
+  id: L1,
+  name: 'Blocks',
+  kind: 'lease_blocks',
+  color: '#A0782C',
+  featureCount: 2,
+  geometryTypes: ['POLYGON'],
+  bbox: [-101, -32.6, -100.8, -32.5],
+  createdAt: '2026-01-01T00:00:00.000Z',
 });
 
 const w1 = well(W1, 'A-1', -101.05, -32.45);
@@ -108,14 +172,20 @@ describe('useAtlasStore', () => {
     atlas.setReason(W1, '  nearest ');
     expect(atlas.offsetsDirty).toBe(true);
     await atlas.saveOffsets();
-    expect(sent).toEqual({ wells: [{ wellId: W2, reason: 'same block' }, { wellId: W1, reason: 'nearest' }] });
+    expect(sent).toEqual({
+      wells: [
+        { wellId: W2, reason: 'same block' },
+        { wellId: W1, reason: 'nearest' },
+      ],
+    });
     expect(atlas.offsetsDirty).toBe(false);
     expect(atlas.candidates.every((c) => c.inOffsetSet)).toBe(true);
   });
 
   it('keeps the saved set when the server refuses, and reports the search error', async () => {
     server({
-      [`GET ${base}/planned-wells/${PW}/offset-candidates?radiusKm=25`]: () => errorReply(400, 'invalid_query', 'radiusKm: must be at most 500 km'),
+      [`GET ${base}/planned-wells/${PW}/offset-candidates?radiusKm=25`]: () =>
+        errorReply(400, 'invalid_query', 'radiusKm: must be at most 500 km'),
     });
     const atlas = useAtlasStore();
     await atlas.load(TEAM_A);

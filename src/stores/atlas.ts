@@ -38,8 +38,7 @@ export interface OffsetPick {
 }
 
 const sameSet = (picks: readonly OffsetPick[], saved: readonly OffsetSetEntry[]) =>
-  picks.length === saved.length &&
-  picks.every((p) => saved.some((s) => s.wellId === p.wellId && (s.reason ?? '') === p.reason.trim()));
+  picks.length === saved.length && picks.every((p) => saved.some((s) => s.wellId === p.wellId && (s.reason ?? '') === p.reason.trim()));
 
 /**
  * The Atlas's shared state: the team's prospects, planned wells, reference layers and wells for framing, what is selected

@@ -52,7 +52,10 @@ describe('useSessionStore', () => {
   });
 
   it('marks an unreachable server as an error with a readable message', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))),
+    );
     const session = useSessionStore();
     await session.fetchMe();
     expect(session.state).toBe('error');

@@ -10,10 +10,7 @@ import { createMemoryHistory, type Router } from 'vue-router';
  * Naive UI message/dialog providers that `useMessage`/`useDialog` need.
  * @example const { wrapper, router } = await mountInApp(SignInForm, { path: '/sign-in' });
  */
-export async function mountInApp(
-  component: Component,
-  options: { props?: Record<string, unknown>; path?: string; pinia?: Pinia } = {},
-) {
+export async function mountInApp(component: Component, options: { props?: Record<string, unknown>; path?: string; pinia?: Pinia } = {}) {
   const pinia = options.pinia ?? createPinia();
   setActivePinia(pinia);
   const router: Router = createAppRouter(createMemoryHistory());

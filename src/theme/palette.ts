@@ -21,8 +21,7 @@ export const PALETTE = {
   ink: '#1B262C',
 } as const;
 
-export const FONT_FAMILY =
-  "Inter, system-ui, -apple-system, 'Segoe UI', Roboto, 'Helvetica Neue', Arial, sans-serif";
+export const FONT_FAMILY = "Inter, system-ui, -apple-system, 'Segoe UI', Roboto, 'Helvetica Neue', Arial, sans-serif";
 
 const shared: GlobalThemeOverrides['common'] = {
   fontFamily: FONT_FAMILY,

@@ -37,9 +37,7 @@ describe('linkify', () => {
 
 describe('sameOriginPath', () => {
   it('returns path, query and hash for the same origin only', () => {
-    expect(sameOriginPath('http://localhost:5173/reset-password?token=x#top', 'http://localhost:5173')).toBe(
-      '/reset-password?token=x#top',
-    );
+    expect(sameOriginPath('http://localhost:5173/reset-password?token=x#top', 'http://localhost:5173')).toBe('/reset-password?token=x#top');
     // Port is part of the origin (WHATWG URL: origin = scheme, host, port).
     expect(sameOriginPath('http://localhost:8080/reset-password?token=x', 'http://localhost:5173')).toBeNull();
   });

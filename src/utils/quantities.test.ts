@@ -1,5 +1,16 @@
 import { describe, expect, it } from 'vitest';
-import { depthIn, depthToMetres, doglegIn, emwIn, formatDepth, formatEmw, formatNumber, formatPressure, MISSING, unitLabel } from './quantities';
+import {
+  depthIn,
+  depthToMetres,
+  doglegIn,
+  emwIn,
+  formatDepth,
+  formatEmw,
+  formatNumber,
+  formatPressure,
+  MISSING,
+  unitLabel,
+} from './quantities';
 
 describe('depths', () => {
   it('reads metres in feet by the international foot', () => {

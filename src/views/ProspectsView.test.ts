@@ -6,7 +6,17 @@ import { mountInApp } from '@/testing/mountInApp';
 import { useAtlasStore } from '@/stores/atlas';
 import ProspectsView from './ProspectsView.vue';
 
-const prospect = (id: string, name: string) => ({ id, name, areaKm2: 20, targetTopM: 2800, targetBaseM: 3500, notes: null, version: 1, updatedAt: '2026-11-30T10:00:00Z', geometry: { type: 'Polygon', coordinates: [] } });
+const prospect = (id: string, name: string) => ({
+  id,
+  name,
+  areaKm2: 20,
+  targetTopM: 2800,
+  targetBaseM: 3500,
+  notes: null,
+  version: 1,
+  updatedAt: '2026-11-30T10:00:00Z',
+  geometry: { type: 'Polygon', coordinates: [] },
+});
 const A = '7c1d2e3f-4a5b-4c6d-8e7f-9a0b1c2d3e4f';
 const B = '2b3c4d5e-6f70-4182-93a4-b5c6d7e8f901';
 
@@ -17,7 +27,7 @@ describe('ProspectsView', () => {
     document.body.innerHTML = '';
   });
 
-  it("links each prospect to its own top-of-overpressure surface screen", async () => {
+  it('links each prospect to its own top-of-overpressure surface screen', async () => {
     installFakeServer({ 'GET /api/auth/me': () => jsonReply(401, { error: { code: 'unauthenticated', message: 'no' } }) });
     const { wrapper, router, pinia } = await mountInApp(ProspectsView, { path: '/sign-in' });
     const atlas = useAtlasStore(pinia);

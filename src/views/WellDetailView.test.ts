@@ -81,7 +81,11 @@ describe('WellDetailView', { timeout: 30_000 }, () => {
   }
 
   it('shows the pressure as entered, in MPa and as EMW, with the caution', async () => {
-    routes('viewer', () => errorReply(403, 'forbidden', 'no'), () => well(3));
+    routes(
+      'viewer',
+      () => errorReply(403, 'forbidden', 'no'),
+      () => well(3),
+    );
     const { wrapper } = await mountInApp(WellDetailView, { props: { wellId: WELL_ID }, path: `/wells/${WELL_ID}` });
     await vi.waitFor(() => expect(wrapper.find('[data-testid="well-pressures"]').exists()).toBe(true));
     await flushPromises();
@@ -97,7 +101,11 @@ describe('WellDetailView', { timeout: 30_000 }, () => {
   });
 
   it("leads to the well's pressure profile from its header, for viewers too", async () => {
-    routes('viewer', () => errorReply(403, 'forbidden', 'no'), () => well(3));
+    routes(
+      'viewer',
+      () => errorReply(403, 'forbidden', 'no'),
+      () => well(3),
+    );
     const { wrapper, router } = await mountInApp(WellDetailView, { props: { wellId: WELL_ID }, path: `/wells/${WELL_ID}` });
     await vi.waitFor(() => expect(wrapper.find('[data-testid="well-profile-open"]').exists()).toBe(true));
     const button = wrapper.get('[data-testid="well-profile-open"]');
@@ -137,7 +145,11 @@ describe('WellDetailView', { timeout: 30_000 }, () => {
   });
 
   it('shows a name clash (409 at the current version) as the server words it, not as a stale edit', async () => {
-    routes('geoscientist', () => errorReply(409, 'conflict', 'Another well in this team already has that name or UWI.'), () => well(3));
+    routes(
+      'geoscientist',
+      () => errorReply(409, 'conflict', 'Another well in this team already has that name or UWI.'),
+      () => well(3),
+    );
     const { wrapper } = await mountInApp(WellDetailView, { props: { wellId: WELL_ID }, path: `/wells/${WELL_ID}` });
     await vi.waitFor(() => expect(wrapper.find('[data-testid="well-edit-open"]').exists()).toBe(true));
     await wrapper.get('[data-testid="well-edit-open"]').trigger('click');

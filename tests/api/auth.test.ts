@@ -38,8 +38,12 @@ describe('sign-in', () => {
   });
 
   it('refuses a wrong password and an unknown user with the same 401', async () => {
-    const wrong = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: 'planner@porelith.example', password: 'nope-nope-nope' });
-    const unknown = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: 'nobody@porelith.example', password: 'nope-nope-nope' });
+    const wrong = await supertest(ctx.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'planner@porelith.example', password: 'nope-nope-nope' });
+    const unknown = await supertest(ctx.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'nobody@porelith.example', password: 'nope-nope-nope' });
     for (const res of [wrong, unknown]) {
       expect(res.status).toBe(401);
       expect(res.body.error).toEqual({ code: 'invalid_credentials', message: 'The e-mail or password is not right.' });
@@ -69,7 +73,10 @@ describe('sign-in', () => {
       for (let i = 0; i < 5; i++) {
         const res = await post('viewer@porelith.example', 'wrong-password');
         codes.push(res.status);
-        if (res.status === 429) expect(res.body.error.message).toMatch(/^Too many failed sign-in attempts for this account from this address; try again in (15 minutes|14 minutes)\.$/);
+        if (res.status === 429)
+          expect(res.body.error.message).toMatch(
+            /^Too many failed sign-in attempts for this account from this address; try again in (15 minutes|14 minutes)\.$/,
+          );
       }
       expect(codes).toEqual([401, 401, 401, 429, 429]);
       // The limit is per account: a colleague at the same address still signs in.
@@ -155,7 +162,9 @@ describe('ending sessions on the server', () => {
   it('refuses a cookie captured before sign-out, and its silently renewed successor, after it', async () => {
     const first = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: 'viewer@porelith.example', password: DEMO_PASSWORD });
     const captured = cookiePair(first);
-    const other = cookiePair(await supertest(ctx.app).post('/api/auth/sign-in').send({ email: 'viewer@porelith.example', password: DEMO_PASSWORD }));
+    const other = cookiePair(
+      await supertest(ctx.app).post('/api/auth/sign-in').send({ email: 'viewer@porelith.example', password: DEMO_PASSWORD }),
+    );
     // A renewed token of the same session, as the browser would hold it past half the lifetime.
     const { jti, sv } = decodeJwt(captured.split('=')[1]);
     const now = Math.floor(Date.now() / 1000);
@@ -189,7 +198,9 @@ describe('ending sessions on the server', () => {
     const since = new Date(Date.now() - 1000);
     await supertest(ctx.app).post('/api/auth/reset-request').send({ email: user.email });
     const mail = await waitForMail(ctx.db, user.email, since);
-    const reset = await supertest(ctx.app).post('/api/auth/reset').send({ token: linkToken(mail.textBody, '/reset-password'), password: 'after-reset-password' });
+    const reset = await supertest(ctx.app)
+      .post('/api/auth/reset')
+      .send({ token: linkToken(mail.textBody, '/reset-password'), password: 'after-reset-password' });
     expect(reset.status).toBe(200);
 
     expect((await me(before)).status).toBe(401);

@@ -20,18 +20,37 @@ afterAll(async () => {
 
 /** Everything the seed wrote for a team, without ids, in a stable order. */
 async function contentOf(teamId: string) {
-  const ws = await ctx.db.select({ id: wells.id, name: wells.name, uwi: wells.uwi, tdMdM: wells.tdMdM }).from(wells).where(eq(wells.teamId, teamId)).orderBy(wells.name);
+  const ws = await ctx.db
+    .select({ id: wells.id, name: wells.name, uwi: wells.uwi, tdMdM: wells.tdMdM })
+    .from(wells)
+    .where(eq(wells.teamId, teamId))
+    .orderBy(wells.name);
   const ids = ws.map((w) => w.id);
   const nameOf = new Map(ws.map((w) => [w.id, w.name]));
   const pressures = await ctx.db
-    .select({ wellId: pressureObservations.wellId, kind: pressureObservations.kind, mdM: pressureObservations.mdM, valueEntered: pressureObservations.valueEntered, unit: pressureObservations.unitEntered, pa: pressureObservations.pressurePa })
+    .select({
+      wellId: pressureObservations.wellId,
+      kind: pressureObservations.kind,
+      mdM: pressureObservations.mdM,
+      valueEntered: pressureObservations.valueEntered,
+      unit: pressureObservations.unitEntered,
+      pa: pressureObservations.pressurePa,
+    })
     .from(pressureObservations)
     .where(inArray(pressureObservations.wellId, ids));
   const curves = await ctx.db
-    .select({ wellId: logCurves.wellId, mnemonic: logCurves.mnemonic, samples: sql<number>`cardinality(${logCurves.values})`, sum: sql<number>`(SELECT sum(v) FROM unnest(${logCurves.values}) v)` })
+    .select({
+      wellId: logCurves.wellId,
+      mnemonic: logCurves.mnemonic,
+      samples: sql<number>`cardinality(${logCurves.values})`,
+      sum: sql<number>`(SELECT sum(v) FROM unnest(${logCurves.values}) v)`,
+    })
     .from(logCurves)
     .where(inArray(logCurves.wellId, ids));
-  const stations = await ctx.db.select({ n: sql<number>`count(*)::int` }).from(surveyStations).where(inArray(surveyStations.wellId, ids));
+  const stations = await ctx.db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(surveyStations)
+    .where(inArray(surveyStations.wellId, ids));
   const named = <T extends { wellId: string }>(rows: T[]) =>
     rows
       .map(({ wellId, ...r }) => ({ well: nameOf.get(wellId)!, ...r }))
@@ -79,7 +98,10 @@ describe('seeding the demo basin', () => {
 
     // A directional well's pressures, survey and logs through the API, as generated.
     const well = demo.wells.find((w) => w.profile !== 'vertical')!;
-    const [row] = await ctx.db.select({ id: wells.id }).from(wells).where(sql`${wells.teamId} = ${team.teamId} AND ${wells.name} = ${well.name}`);
+    const [row] = await ctx.db
+      .select({ id: wells.id })
+      .from(wells)
+      .where(sql`${wells.teamId} = ${team.teamId} AND ${wells.name} = ${well.name}`);
     const base = `/api/teams/${team.teamId}/wells/${row.id}`;
     const pressures = await team.agent.get(`${base}/pressures`);
     expect(pressures.status).toBe(200);
@@ -130,7 +152,11 @@ describe('seeding the demo basin', () => {
     const cands = (await team.agent.get(`/api/teams/${team.teamId}/planned-wells/${planned[0].id}/offset-candidates?radiusKm=15`)).body;
     expect(cands.length).toBeGreaterThan(0);
     // Demo wells come with an accepted automatic TOP pick, so surfaces and offsets have something to show.
-    const withTop = await Promise.all(cands.slice(0, 5).map((c: { wellId: string }) => team.agent.get(`/api/teams/${team.teamId}/wells/${c.wellId}/interpretations/current`)));
+    const withTop = await Promise.all(
+      cands
+        .slice(0, 5)
+        .map((c: { wellId: string }) => team.agent.get(`/api/teams/${team.teamId}/wells/${c.wellId}/interpretations/current`)),
+    );
     const found = withTop.filter((r) => r.status === 200);
     expect(found.length).toBeGreaterThan(0);
     expect(found[0].body).toMatchObject({ version: 1, status: 'accepted', top: { method: 'auto' } });
@@ -142,8 +168,11 @@ describe('seeding the demo basin', () => {
     const team = await freshTeamAgent(ctx, 'Demo planned TD', 'planner');
     createdTeams.push(team.teamId);
     await seedDemoBasin(ctx.db, team.teamId);
-    const prospects: { id: string; name: string; targetBaseM: number }[] = (await team.agent.get(`/api/teams/${team.teamId}/prospects`)).body;
-    const planned: { name: string; prospectId: string; plannedTdM: number; datumElevationM: number }[] = (await team.agent.get(`/api/teams/${team.teamId}/planned-wells`)).body;
+    const prospects: { id: string; name: string; targetBaseM: number }[] = (await team.agent.get(`/api/teams/${team.teamId}/prospects`))
+      .body;
+    const planned: { name: string; prospectId: string; plannedTdM: number; datumElevationM: number }[] = (
+      await team.agent.get(`/api/teams/${team.teamId}/planned-wells`)
+    ).body;
     expect(planned.length).toBeGreaterThan(0);
     for (const w of planned) {
       const p = prospects.find((x) => x.id === w.prospectId)!;

@@ -24,7 +24,10 @@ describe('the first admin of an install without demo accounts', () => {
   it('makes an existing account admin without touching its password', async () => {
     const email = `lead-${randomUUID().slice(0, 8)}@example.org`;
     const first = await createFirstAdmin(ctx.db, firstAdminInput.parse({ email, name: 'Lead', team: `Team ${randomUUID().slice(0, 8)}` }));
-    const second = await createFirstAdmin(ctx.db, firstAdminInput.parse({ email: email.toUpperCase(), name: 'Lead', team: `Team ${randomUUID().slice(0, 8)}` }));
+    const second = await createFirstAdmin(
+      ctx.db,
+      firstAdminInput.parse({ email: email.toUpperCase(), name: 'Lead', team: `Team ${randomUUID().slice(0, 8)}` }),
+    );
     expect(second.password).toBeNull();
     expect(second.userId).toBe(first.userId);
     const agent = await signedInAgent(ctx, email, first.password!);

@@ -22,12 +22,16 @@ function post(name: string, kind: string, fields: Record<string, string> = {}, b
 }
 
 async function counts() {
-  const [row] = await ctx.db.execute<{ wells: number; pressures: number; tops: number; stations: number; uploads: number }>(sql`
+  const [row] = await ctx.db
+    .execute<{ wells: number; pressures: number; tops: number; stations: number; uploads: number }>(
+      sql`
     SELECT (SELECT count(*)::int FROM ${wells} WHERE team_id = ${team.teamId}) AS wells,
            (SELECT count(*)::int FROM ${pressureObservations} p JOIN ${wells} w ON w.id = p.well_id WHERE w.team_id = ${team.teamId}) AS pressures,
            (SELECT count(*)::int FROM ${formationTops} t JOIN ${wells} w ON w.id = t.well_id WHERE w.team_id = ${team.teamId}) AS tops,
            (SELECT count(*)::int FROM ${surveyStations} s JOIN ${wells} w ON w.id = s.well_id WHERE w.team_id = ${team.teamId}) AS stations,
-           (SELECT count(*)::int FROM ${uploads} WHERE team_id = ${team.teamId}) AS uploads`).then((r) => r.rows);
+           (SELECT count(*)::int FROM ${uploads} WHERE team_id = ${team.teamId}) AS uploads`,
+    )
+    .then((r) => r.rows);
   return row;
 }
 
@@ -150,7 +154,8 @@ describe('well header CSV', () => {
       {
         line: 3,
         column: 'easting',
-        message: '(6400000, 500000) in EPSG:32713 lies at lon -19.203, 85.8° from the zone 13 central meridian (105°W): are easting and northing swapped, or is the EPSG code wrong?',
+        message:
+          '(6400000, 500000) in EPSG:32713 lies at lon -19.203, 85.8° from the zone 13 central meridian (105°W): are easting and northing swapped, or is the EPSG code wrong?',
       },
     ]);
     expect(res.body.counts).toMatchObject({ valid: 1, invalid: 1 });
@@ -247,7 +252,7 @@ describe('surveys and pressures', () => {
     expect(await counts()).toEqual(before);
   });
 
-  it('warns, naming the line, of a pressure or a top below the well\'s TD, without blocking it', async () => {
+  it("warns, naming the line, of a pressure or a top below the well's TD, without blocking it", async () => {
     // TEST-1 has TD 3500 m MD (wells-good.csv).
     const csv = Buffer.from('well,kind,md (m),value,unit\nTEST-1,kick,1000,1.2,sg\nTEST-1,kick,9000,1.3,sg\n');
     const res = await post('deep-pressure.csv', 'pressures', { dryRun: 'true' }, csv);
@@ -255,12 +260,25 @@ describe('surveys and pressures', () => {
     expect(res.body.problems).toEqual([]);
     expect(res.body.counts.valid).toBe(2);
     expect(res.body.warnings).toEqual([
-      { line: 3, column: 'md (m)', message: 'MD 9000.0 m is deeper than the TD of well "TEST-1" (3500.0 m MD): check the depth, its unit, or the well\'s TD' },
+      {
+        line: 3,
+        column: 'md (m)',
+        message: 'MD 9000.0 m is deeper than the TD of well "TEST-1" (3500.0 m MD): check the depth, its unit, or the well\'s TD',
+      },
     ]);
-    const tops = await post('deep-top.csv', 'tops', { dryRun: 'true' }, Buffer.from('well,name,md (m)\nTEST-1,Deep Sand,4000\nTEST-1,Shallow Sand,900\n'));
+    const tops = await post(
+      'deep-top.csv',
+      'tops',
+      { dryRun: 'true' },
+      Buffer.from('well,name,md (m)\nTEST-1,Deep Sand,4000\nTEST-1,Shallow Sand,900\n'),
+    );
     expect(tops.body.problems).toEqual([]);
     expect(tops.body.warnings).toEqual([
-      { line: 2, column: 'md (m)', message: 'MD 4000.0 m is deeper than the TD of well "TEST-1" (3500.0 m MD): check the depth, its unit, or the well\'s TD' },
+      {
+        line: 2,
+        column: 'md (m)',
+        message: 'MD 4000.0 m is deeper than the TD of well "TEST-1" (3500.0 m MD): check the depth, its unit, or the well\'s TD',
+      },
     ]);
   });
 
@@ -285,7 +303,11 @@ describe('surveys and pressures', () => {
     expect(res.body.error.details).toEqual([
       { line: 1, column: 'md', message: 'unit "furlong" is not one of m, ft' },
       { line: 1, column: 'value', message: 'unit "atm" is not one of psi, kPa, MPa, bar, Pa, ppg, sg, g/cc, kg/m3, psi/ft, kPa/m' },
-      { line: 1, column: 'depth', message: 'a unit was chosen for "depth", which is not a numeric field of a pressures import (md, tvd, value)' },
+      {
+        line: 1,
+        column: 'depth',
+        message: 'a unit was chosen for "depth", which is not a numeric field of a pressures import (md, tvd, value)',
+      },
     ]);
     expect(await counts()).toEqual(before);
   });
@@ -321,7 +343,11 @@ describe('surveys and pressures', () => {
     const res = await post('survey-unsorted.csv', 'surveys', {}, csv);
     expect(res.status).toBe(422);
     expect(res.body.error.details).toEqual([
-      { line: 4, column: 'md (m)', message: 'MD 600 m is shallower than MD 800 m at line 3 for well "TEST-1": stations must increase in MD' },
+      {
+        line: 4,
+        column: 'md (m)',
+        message: 'MD 600 m is shallower than MD 800 m at line 3 for well "TEST-1": stations must increase in MD',
+      },
     ]);
     expect(await counts()).toEqual(before);
   });
@@ -399,14 +425,20 @@ describe('formation tops', () => {
 describe('permissions', () => {
   it('lets a viewer see the upload history but not import', async () => {
     const viewer = await freshTeamAgent(ctx, 'Viewer import tests', 'viewer');
-    const res = await viewer.agent.post(`/api/teams/${viewer.teamId}/imports`).field('kind', 'wells').attach('file', fixture('wells-good.csv'), 'w.csv');
+    const res = await viewer.agent
+      .post(`/api/teams/${viewer.teamId}/imports`)
+      .field('kind', 'wells')
+      .attach('file', fixture('wells-good.csv'), 'w.csv');
     expect(res.status).toBe(403);
     expect((await viewer.agent.get(`/api/teams/${viewer.teamId}/imports`)).status).toBe(200);
   });
 
   it('keeps team B out of team A: no import, no reading', async () => {
     const other = await freshTeamAgent(ctx, 'Other import team', 'admin');
-    const res = await other.agent.post(`/api/teams/${team.teamId}/imports`).field('kind', 'wells').attach('file', fixture('wells-good.csv'), 'w.csv');
+    const res = await other.agent
+      .post(`/api/teams/${team.teamId}/imports`)
+      .field('kind', 'wells')
+      .attach('file', fixture('wells-good.csv'), 'w.csv');
     expect(res.status).toBe(403);
     expect((await other.agent.get(`/api/teams/${team.teamId}/wells`)).status).toBe(403);
     expect((await other.agent.get(`/api/teams/${team.teamId}/imports`)).status).toBe(403);

@@ -7,7 +7,16 @@ let url: string;
 
 const content = (tvdM: number) => ({
   normalDensityKgM3: 1030,
-  trend: { curveId: null, curve: 'sonic', model: 'exponential', fromM: 800, toM: 1800, params: { matrix: 55, surface: 180, cPerM: 0.0006 }, r2: 0.91, gammaCutoffApi: 75 },
+  trend: {
+    curveId: null,
+    curve: 'sonic',
+    model: 'exponential',
+    fromM: 800,
+    toM: 1800,
+    params: { matrix: 55, surface: 180, cPerM: 0.0006 },
+    r2: 0.91,
+    gammaCutoffApi: 75,
+  },
   pore: { method: 'eaton-sonic', exponent: 3 },
   fracture: { method: 'eaton', poissonTop: 0.38, poissonGradientPerKm: 0.02 },
   top: { tvdM, method: 'auto', confidence: 'high', comment: 'ramp starts under the Orsel Shale', marginKgM3: 36, minThicknessM: 50 },

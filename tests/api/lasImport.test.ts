@@ -42,12 +42,19 @@ function withWellItems(text: string, ...lines: string[]) {
   const params = lines.indexOf('~PARAMETER INFORMATION');
   const wellItems = params < 0 ? lines : lines.slice(0, params);
   all.splice(well + 1, 0, ...wellItems);
-  if (params >= 0) all.splice(all.findIndex((l) => l.startsWith('~CURVE')), 0, ...lines.slice(params));
+  if (params >= 0)
+    all.splice(
+      all.findIndex((l) => l.startsWith('~CURVE')),
+      0,
+      ...lines.slice(params),
+    );
   return all.join('\n');
 }
 
 async function curveCount() {
-  const r = await ctx.db.execute<{ n: number }>(sql`SELECT count(*)::int AS n FROM ${logCurves} l JOIN ${wells} w ON w.id = l.well_id WHERE w.team_id = ${team.teamId}`);
+  const r = await ctx.db.execute<{ n: number }>(
+    sql`SELECT count(*)::int AS n FROM ${logCurves} l JOIN ${wells} w ON w.id = l.well_id WHERE w.team_id = ${team.teamId}`,
+  );
   return r.rows[0].n;
 }
 
@@ -94,7 +101,14 @@ describe('LAS 2.0 import', () => {
 
   it('refuses broken files with the line of each problem and writes nothing', async () => {
     const before = await curveCount();
-    for (const name of ['missing-a.las', 'wrong-value-count.las', 'text-in-numbers.las', 'las30.las', 'huge-line.las', 'non-monotonic.las']) {
+    for (const name of [
+      'missing-a.las',
+      'wrong-value-count.las',
+      'text-in-numbers.las',
+      'las30.las',
+      'huge-line.las',
+      'non-monotonic.las',
+    ]) {
       const res = await post(name, { wellId });
       expect(res.status, name).toBe(422);
       expect(res.body.error.details.length, name).toBeGreaterThan(0);
@@ -124,12 +138,17 @@ describe('LAS 2.0 import', () => {
           'no well named "OSPREY-9" or with UWI/API "199999999999W599" in this team, and the file has no LATI/LONG (or X/Y) in ~W or ~P to create it; import the well header first or choose the well',
       },
     ]);
-    const half = await post('half.las', { dryRun: 'true' }, Buffer.from(withWellItems(text, ' LATI.DEG        -32.61                       : LATITUDE')));
+    const half = await post(
+      'half.las',
+      { dryRun: 'true' },
+      Buffer.from(withWellItems(text, ' LATI.DEG        -32.61                       : LATITUDE')),
+    );
     expect(half.body.problems).toEqual([
       {
         line: 12,
         column: 'WELL',
-        message: 'no well named "OSPREY-9" or with UWI/API "199999999999W599" in this team, and the file has LATI but no LONG to create it; import the well header first or choose the well',
+        message:
+          'no well named "OSPREY-9" or with UWI/API "199999999999W599" in this team, and the file has LATI but no LONG to create it; import the well header first or choose the well',
       },
     ]);
   });
@@ -146,20 +165,30 @@ describe('LAS 2.0 import', () => {
     const preview = await post('osprey.las', { dryRun: 'true' }, Buffer.from(text));
     expect(preview.body.problems).toEqual([]);
     // 32° 36′ 36″ = 32 + 36/60 + 36/3600 = 32.61° (ISO 6709 sexagesimal degrees); 82 ft × 0.3048 m/ft exactly.
-    expect(preview.body.las.plan.createWell).toMatchObject({ name: 'OSPREY-9', uwi: '199999999999W599', lon: -101.215, surfaceEpsg: 4326, datumKind: 'KB', operator: 'SYNTHETIC SURVEY CO' });
+    expect(preview.body.las.plan.createWell).toMatchObject({
+      name: 'OSPREY-9',
+      uwi: '199999999999W599',
+      lon: -101.215,
+      surfaceEpsg: 4326,
+      datumKind: 'KB',
+      operator: 'SYNTHETIC SURVEY CO',
+    });
     expect(preview.body.las.plan.createWell.lat).toBeCloseTo(-32.61, 12);
     expect(preview.body.las.plan.createWell.datumElevationM).toBeCloseTo(82 * 0.3048, 12);
     expect(preview.body.counts).toMatchObject({ createWell: 1, valid: 4 });
     expect(preview.body.notes[0]).toEqual({
       line: 12,
       column: 'WELL',
-      message: 'no well "OSPREY-9" or UWI/API "199999999999W599" in this team: the import creates it at lon -101.21500, lat -32.61000 from LATI/LONG (lines 13, 14)',
+      message:
+        'no well "OSPREY-9" or UWI/API "199999999999W599" in this team: the import creates it at lon -101.21500, lat -32.61000 from LATI/LONG (lines 13, 14)',
     });
     // No water depth in the file: onshore/offshore comes from the nearest team well (KESTREL-3 ST1,
     // ~13 km away by the haversine formula), and the preview says so along with what the well lacks.
     expect(preview.body.las.plan.createWell).toMatchObject({ tdMdM: 1502, waterDepthM: null, offshore: false });
     expect(preview.body.notes[1].line).toBe(12);
-    expect(preview.body.notes[1].message).toMatch(/^the new well "OSPREY-9" has onshore assumed from the nearest team well "KESTREL-3 ST1", 1[34]\.\d km away; TD 1502\.0 m MD taken from the deepest depth of the file, no TD TVD; no spud date; status "drilled" — edit its header before interpreting it$/);
+    expect(preview.body.notes[1].message).toMatch(
+      /^the new well "OSPREY-9" has onshore assumed from the nearest team well "KESTREL-3 ST1", 1[34]\.\d km away; TD 1502\.0 m MD taken from the deepest depth of the file, no TD TVD; no spud date; status "drilled" — edit its header before interpreting it$/,
+    );
     expect((await team.agent.get(`${base}/wells?q=OSPREY-9`)).body.total).toBe(0);
 
     const res = await post('osprey.las', {}, Buffer.from(text));
@@ -203,7 +232,14 @@ describe('LAS 2.0 import', () => {
   });
 
   it('assumes onshore for a new well with no water depth and no team well within 20 km, and says so', async () => {
-    const text = withWellItems(unknownWell('PLOVER-2', '166666666666W566'), ' LATI.DEG  5.5  : LATITUDE', ' LONG.DEG  10.25  : LONGITUDE', '~PARAMETER INFORMATION', ' EPD .M   12.0  : PERMANENT DATUM ELEVATION', ' APD .M   9.5  : ABOVE PERMANENT DATUM');
+    const text = withWellItems(
+      unknownWell('PLOVER-2', '166666666666W566'),
+      ' LATI.DEG  5.5  : LATITUDE',
+      ' LONG.DEG  10.25  : LONGITUDE',
+      '~PARAMETER INFORMATION',
+      ' EPD .M   12.0  : PERMANENT DATUM ELEVATION',
+      ' APD .M   9.5  : ABOVE PERMANENT DATUM',
+    );
     const preview = await post('plover.las', { dryRun: 'true' }, Buffer.from(text));
     expect(preview.body.problems).toEqual([]);
     // LAS 2.0: the log reference is APD above the permanent datum, which is EPD above sea level.
@@ -212,26 +248,36 @@ describe('LAS 2.0 import', () => {
   });
 
   it('says why an unreadable location cannot create the well, at both lines', async () => {
-    const text = withWellItems(unknownWell('PETREL-4', '177777777777W577'), ' LATI.DEG        -132.61                      : LATITUDE', ' LONG.DEG        -101.215                     : LONGITUDE');
+    const text = withWellItems(
+      unknownWell('PETREL-4', '177777777777W577'),
+      ' LATI.DEG        -132.61                      : LATITUDE',
+      ' LONG.DEG        -101.215                     : LONGITUDE',
+    );
     const res = await post('far.las', { dryRun: 'true' }, Buffer.from(text));
     expect(res.body.problems).toEqual([
       {
         line: 12,
         column: 'WELL',
-        message: 'no well named "PETREL-4" or with UWI/API "177777777777W577" in this team, and the location in the file cannot create it (see line 13); import the well header first or choose the well',
+        message:
+          'no well named "PETREL-4" or with UWI/API "177777777777W577" in this team, and the location in the file cannot create it (see line 13); import the well header first or choose the well',
       },
       { line: 13, column: 'LATI', message: 'latitude -132.61 is outside −90..90' },
     ]);
   });
 
   it('creates the well from X/Y only with the EPSG code the user gives', async () => {
-    const text = withWellItems(unknownWell('HERON-2', '188888888888W588'), ' X   .M          500000                       : EASTING', ' Y   .M          6400000                      : NORTHING');
+    const text = withWellItems(
+      unknownWell('HERON-2', '188888888888W588'),
+      ' X   .M          500000                       : EASTING',
+      ' Y   .M          6400000                      : NORTHING',
+    );
     const bare = await post('heron.las', { dryRun: 'true' }, Buffer.from(text));
     expect(bare.body.problems).toEqual([
       {
         line: 12,
         column: 'WELL',
-        message: 'no well named "HERON-2" or with UWI/API "188888888888W588" in this team, and the location in the file cannot create it (see line 13); import the well header first or choose the well',
+        message:
+          'no well named "HERON-2" or with UWI/API "188888888888W588" in this team, and the location in the file cannot create it (see line 13); import the well header first or choose the well',
       },
       { line: 13, column: 'X', message: 'the file gives X/Y but no LATI/LONG: choose the EPSG code of X/Y to create well "HERON-2"' },
     ]);
@@ -244,7 +290,11 @@ describe('LAS 2.0 import', () => {
     expect(res.body.las.plan.createWell.lon).toBeCloseTo(lon, 9);
     expect(res.body.las.plan.createWell.lat).toBeCloseTo(lat, 9);
     // Swapped X/Y are refused, saying they may be swapped.
-    const swapped = withWellItems(unknownWell('HERON-2', '188888888888W588'), ' X   .M          6400000                      : EASTING', ' Y   .M          500000                       : NORTHING');
+    const swapped = withWellItems(
+      unknownWell('HERON-2', '188888888888W588'),
+      ' X   .M          6400000                      : EASTING',
+      ' Y   .M          500000                       : NORTHING',
+    );
     const bad = await post('heron-swapped.las', { dryRun: 'true', epsg: '32713' }, Buffer.from(swapped));
     expect(bad.body.problems).toHaveLength(2);
     expect(bad.body.problems[1]).toMatchObject({ line: 13, column: 'X' });
@@ -254,7 +304,12 @@ describe('LAS 2.0 import', () => {
   it('refuses a file whose data uses another null marker than its NULL, at the NULL line, with honest sample counts', async () => {
     const res = await post('wrong-null-sentinel.las', { dryRun: 'true', wellId });
     expect(res.body.problems).toEqual([
-      { line: 8, column: 'NULL', message: "the file's NULL is -999.25 but its data uses -9999 for gaps (9 samples of GR, RHOB, first at line 25); correct NULL in ~W" },
+      {
+        line: 8,
+        column: 'NULL',
+        message:
+          "the file's NULL is -999.25 but its data uses -9999 for gaps (9 samples of GR, RHOB, first at line 25); correct NULL in ~W",
+      },
     ]);
     const gr = res.body.preview.find((c: { mnemonic: string }) => c.mnemonic === 'GR');
     expect(gr).toMatchObject({ samples: 12, validSamples: 6 });

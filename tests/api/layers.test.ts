@@ -11,7 +11,18 @@ let base: string;
 const block = (lon: number, lat: number, name: string) => ({
   type: 'Feature',
   properties: { name },
-  geometry: { type: 'Polygon', coordinates: [[[lon, lat], [lon + 0.1, lat], [lon + 0.1, lat + 0.1], [lon, lat + 0.1], [lon, lat]]] },
+  geometry: {
+    type: 'Polygon',
+    coordinates: [
+      [
+        [lon, lat],
+        [lon + 0.1, lat],
+        [lon + 0.1, lat + 0.1],
+        [lon, lat + 0.1],
+        [lon, lat],
+      ],
+    ],
+  },
 });
 const fc = (features: unknown[]) => Buffer.from(JSON.stringify({ type: 'FeatureCollection', features }));
 
@@ -57,8 +68,25 @@ describe('reference layers', () => {
     const notFc = await upload('x.geojson', Buffer.from('{"type":"Feature"}'));
     expect(notFc.body.error.message).toMatch(/is not a GeoJSON FeatureCollection/);
     const outside = await upload('x.geojson', fc([block(-101, -32.6, 'ok'), block(200, 10, 'bad')]));
-    expect(outside.body.error.message).toBe('Feature 2 has a position (200, 10) outside longitude −180..180 / latitude −90..90; GeoJSON is WGS 84 lon/lat.');
-    const bow = { type: 'Feature', properties: {}, geometry: { type: 'Polygon', coordinates: [[[-101, -32.5], [-100.9, -32.4], [-100.9, -32.5], [-101, -32.4], [-101, -32.5]]] } };
+    expect(outside.body.error.message).toBe(
+      'Feature 2 has a position (200, 10) outside longitude −180..180 / latitude −90..90; GeoJSON is WGS 84 lon/lat.',
+    );
+    const bow = {
+      type: 'Feature',
+      properties: {},
+      geometry: {
+        type: 'Polygon',
+        coordinates: [
+          [
+            [-101, -32.5],
+            [-100.9, -32.4],
+            [-100.9, -32.5],
+            [-101, -32.4],
+            [-101, -32.5],
+          ],
+        ],
+      },
+    };
     const invalid = await upload('x.geojson', fc([block(-101, -32.6, 'ok'), bow]));
     expect(invalid.status).toBe(400);
     // The two diagonals of the bow-tie cross at (−100.95, −32.45).
@@ -125,7 +153,10 @@ describe('reference layers', () => {
     // A tile away from the blocks holds nothing of them.
     expect((await team.agent.get(`${base}/tiles/reference-${blocks.id}/8/0/0.mvt`)).status).toBe(204);
     const planner = await memberAgent(ctx, team.teamId, 'planner');
-    const refused = await planner.agent.post(`${base}/layers`).field('name', 'p').attach('file', fc([block(-101, -32.6, 'p')]), 'p.geojson');
+    const refused = await planner.agent
+      .post(`${base}/layers`)
+      .field('name', 'p')
+      .attach('file', fc([block(-101, -32.6, 'p')]), 'p.geojson');
     expect(refused.status).toBe(403);
   });
 });

@@ -42,15 +42,21 @@ describe('invitation by e-mail', () => {
 
   it('refuses to invite someone who is already a member', async () => {
     const admin = await signedInAgent(ctx, 'admin@porelith.example');
-    const res = await admin.post(`/api/teams/${ctx.demoTeamId}/invitations`).send({ email: 'planner@porelith.example', name: 'P', role: 'viewer' });
+    const res = await admin
+      .post(`/api/teams/${ctx.demoTeamId}/invitations`)
+      .send({ email: 'planner@porelith.example', name: 'P', role: 'viewer' });
     expect(res.status).toBe(409);
   });
 
   it('refuses a made-up token and a too-short password by name', async () => {
-    const forged = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: 'x'.repeat(43), password: 'long-enough-password' });
+    const forged = await supertest(ctx.app)
+      .post('/api/auth/accept-invite')
+      .send({ token: 'x'.repeat(43), password: 'long-enough-password' });
     expect(forged.status).toBe(400);
     expect(forged.body.error.code).toBe('invalid_token');
-    const short = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: 'x'.repeat(43), password: 'short' });
+    const short = await supertest(ctx.app)
+      .post('/api/auth/accept-invite')
+      .send({ token: 'x'.repeat(43), password: 'short' });
     expect(short.status).toBe(400);
     expect(short.body.error.details).toEqual([{ path: 'password', message: 'must be at least 10 characters' }]);
   });
@@ -61,7 +67,9 @@ describe('invitation to an e-mail that already has an account (takeover regressi
     const attacker = await freshTeamAgent(ctx, 'Takeover attacker team', 'admin');
     const victim = await freshTeamAgent(ctx, 'Takeover victim team', 'viewer');
     const since = new Date(Date.now() - 1000);
-    const inv = await attacker.agent.post(`/api/teams/${attacker.teamId}/invitations`).send({ email: victim.email, name: 'Victim', role: 'admin' });
+    const inv = await attacker.agent
+      .post(`/api/teams/${attacker.teamId}/invitations`)
+      .send({ email: victim.email, name: 'Victim', role: 'admin' });
     expect(inv.status).toBe(201);
     await waitForMail(ctx.db, victim.email, since);
 
@@ -89,9 +97,14 @@ describe('invitation to an e-mail that already has an account (takeover regressi
     // Nothing was written: the invitation is still open, no membership, the password is unchanged.
     const [row] = await ctx.db.select().from(invitations).where(eq(invitations.id, inv.body.id));
     expect(row.acceptedAt).toBeNull();
-    const joined = await ctx.db.select().from(memberships).where(and(eq(memberships.userId, victim.userId), eq(memberships.teamId, attacker.teamId)));
+    const joined = await ctx.db
+      .select()
+      .from(memberships)
+      .where(and(eq(memberships.userId, victim.userId), eq(memberships.teamId, attacker.teamId)));
     expect(joined).toEqual([]);
-    const asAttacker = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: victim.email, password: 'attacker-chosen-password' });
+    const asAttacker = await supertest(ctx.app)
+      .post('/api/auth/sign-in')
+      .send({ email: victim.email, password: 'attacker-chosen-password' });
     expect(asAttacker.status).toBe(401);
     const asVictim = await supertest(ctx.app).post('/api/auth/sign-in').send({ email: victim.email, password: victim.password });
     expect(asVictim.status).toBe(200);
@@ -101,7 +114,9 @@ describe('invitation to an e-mail that already has an account (takeover regressi
     const inviter = await freshTeamAgent(ctx, 'Joining team', 'admin');
     const member = await freshTeamAgent(ctx, 'Home team', 'planner');
     const since = new Date(Date.now() - 1000);
-    await inviter.agent.post(`/api/teams/${inviter.teamId}/invitations`).send({ email: member.email, name: 'Renamed?', role: 'geoscientist' });
+    await inviter.agent
+      .post(`/api/teams/${inviter.teamId}/invitations`)
+      .send({ email: member.email, name: 'Renamed?', role: 'geoscientist' });
     const mail = await waitForMail(ctx.db, member.email, since);
     expect(mail.textBody).toMatch(/current password/);
     expect(mail.textBody).toContain('&existing=1');
@@ -128,7 +143,9 @@ describe('password reset', () => {
     const since = new Date(Date.now() - 1000);
     await admin.post(`/api/teams/${ctx.demoTeamId}/invitations`).send({ email, name: 'Resetter', role: 'viewer' });
     const invite = await waitForMail(ctx.db, email, since);
-    await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: linkToken(invite.textBody, '/accept-invite'), password: 'first-password-1' });
+    await supertest(ctx.app)
+      .post('/api/auth/accept-invite')
+      .send({ token: linkToken(invite.textBody, '/accept-invite'), password: 'first-password-1' });
 
     const since2 = new Date();
     const req = await supertest(ctx.app).post('/api/auth/reset-request').send({ email });
@@ -190,7 +207,9 @@ describe('expired links', () => {
     const res = await supertest(ctx.app).post('/api/auth/reset').send({ token, password: 'too-late-password' });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('invalid_token');
-    expect(res.body.error.message).toBe('This password-reset link has expired (links last 60 minutes); ask for a new one from the sign-in page.');
+    expect(res.body.error.message).toBe(
+      'This password-reset link has expired (links last 60 minutes); ask for a new one from the sign-in page.',
+    );
     expect(res.headers['set-cookie']).toBeUndefined();
     const [after] = await ctx.db.select().from(users).where(eq(users.id, user.userId));
     expect(after).toEqual(before);
@@ -226,20 +245,31 @@ describe('opening a link checks it before any password is typed', () => {
     await supertest(ctx.app).post('/api/auth/accept-invite').send({ token, password: 'opener-password-1' }).expect(200);
     const used = await supertest(ctx.app).get(`/api/auth/invitations/${token}`);
     expect(used.status).toBe(410);
-    expect(used.body.error).toMatchObject({ code: 'invalid_token', message: 'This invitation link was used already; each link works once.' });
+    expect(used.body.error).toMatchObject({
+      code: 'invalid_token',
+      message: 'This invitation link was used already; each link works once.',
+    });
     expect(JSON.stringify(used.body)).not.toContain(email);
 
-    await ctx.db.update(invitations).set({ acceptedAt: null, expiresAt: new Date(Date.now() - 60_000) }).where(eq(invitations.id, inv.body.id));
+    await ctx.db
+      .update(invitations)
+      .set({ acceptedAt: null, expiresAt: new Date(Date.now() - 60_000) })
+      .where(eq(invitations.id, inv.body.id));
     const expired = await supertest(ctx.app).get(`/api/auth/invitations/${token}`);
     expect(expired.status).toBe(410);
-    expect(expired.body.error.message).toBe('This invitation link has expired (links last 7 days); ask your team admin to invite you again.');
+    expect(expired.body.error.message).toBe(
+      'This invitation link has expired (links last 7 days); ask your team admin to invite you again.',
+    );
   });
 
   it('says existingAccount for an address that has an account', async () => {
     const inviter = await freshTeamAgent(ctx, 'Check existing team', 'admin');
     const member = await freshTeamAgent(ctx, 'Check home team', 'viewer');
     const since = new Date(Date.now() - 1000);
-    await inviter.agent.post(`/api/teams/${inviter.teamId}/invitations`).send({ email: member.email, name: 'M', role: 'viewer' }).expect(201);
+    await inviter.agent
+      .post(`/api/teams/${inviter.teamId}/invitations`)
+      .send({ email: member.email, name: 'M', role: 'viewer' })
+      .expect(201);
     const token = linkToken((await waitForMail(ctx.db, member.email, since)).textBody, '/accept-invite');
     const open = await supertest(ctx.app).get(`/api/auth/invitations/${token}`);
     expect(open.body).toEqual({ email: member.email, teamName: expect.stringContaining('Check existing team'), existingAccount: true });

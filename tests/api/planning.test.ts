@@ -29,18 +29,30 @@ afterAll(() => ctx.close());
 
 const square = (lon: number, lat: number, d: number) => ({
   type: 'Polygon' as const,
-  coordinates: [[[lon - d, lat - d], [lon + d, lat - d], [lon + d, lat + d], [lon - d, lat + d], [lon - d, lat - d]]],
+  coordinates: [
+    [
+      [lon - d, lat - d],
+      [lon + d, lat - d],
+      [lon + d, lat + d],
+      [lon - d, lat + d],
+      [lon - d, lat - d],
+    ],
+  ],
 });
 
 describe('prospects', () => {
   it('creates, reads with its area, updates with the version, and deletes', async () => {
     const geometry = square(-101, -32.5, 0.05);
-    const created = await planner.agent.post(`${base}/prospects`).send({ name: 'Lantern Fan', geometry, targetTopM: 2800, targetBaseM: 3400 });
+    const created = await planner.agent
+      .post(`${base}/prospects`)
+      .send({ name: 'Lantern Fan', geometry, targetTopM: 2800, targetBaseM: 3400 });
     expect(created.status).toBe(201);
     // Area on the spheroid: PostGIS geography against turf's spherical area, within 0.5 % (they use different earth models).
     expect(created.body.areaKm2).toBeCloseTo(turf.area(turf.polygon(geometry.coordinates)) / 1e6, -1);
     expect(Math.abs(created.body.areaKm2 / (turf.area(turf.polygon(geometry.coordinates)) / 1e6) - 1)).toBeLessThan(0.005);
-    const stale = await planner.agent.patch(`${base}/prospects/${created.body.id}`).send({ version: 1, name: 'Lantern Fan North', geometry });
+    const stale = await planner.agent
+      .patch(`${base}/prospects/${created.body.id}`)
+      .send({ version: 1, name: 'Lantern Fan North', geometry });
     expect(stale.status).toBe(200);
     const again = await planner.agent.patch(`${base}/prospects/${created.body.id}`).send({ version: 1, name: 'older', geometry });
     expect(again.status).toBe(409);
@@ -51,11 +63,32 @@ describe('prospects', () => {
 
   it('refuses self-intersecting, open, empty and out-of-range outlines, storing nothing', async () => {
     const before = (await planner.agent.get(`${base}/prospects`)).body.length;
-    const bowtie = { type: 'Polygon', coordinates: [[[-101, -32.5], [-100.9, -32.4], [-100.9, -32.5], [-101, -32.4], [-101, -32.5]]] };
+    const bowtie = {
+      type: 'Polygon',
+      coordinates: [
+        [
+          [-101, -32.5],
+          [-100.9, -32.4],
+          [-100.9, -32.5],
+          [-101, -32.4],
+          [-101, -32.5],
+        ],
+      ],
+    };
     const r1 = await planner.agent.post(`${base}/prospects`).send({ name: 'Bow', geometry: bowtie });
     expect(r1.status).toBe(400);
     expect(r1.body.error.message).toMatch(/^The outline is not a valid polygon: Self-intersection/);
-    const open = { type: 'Polygon', coordinates: [[[-101, -32.5], [-100.9, -32.5], [-100.9, -32.4], [-101, -32.4]]] };
+    const open = {
+      type: 'Polygon',
+      coordinates: [
+        [
+          [-101, -32.5],
+          [-100.9, -32.5],
+          [-100.9, -32.4],
+          [-101, -32.4],
+        ],
+      ],
+    };
     const r2 = await planner.agent.post(`${base}/prospects`).send({ name: 'Open', geometry: open });
     expect(r2.body.error.message).toBe('The outline is not closed: its last position must equal its first.');
     const empty = await planner.agent.post(`${base}/prospects`).send({ name: 'Empty', geometry: { type: 'Polygon', coordinates: [] } });
@@ -82,7 +115,9 @@ describe('wells around a prospect alone', () => {
     expect(res.status).toBe(200);
     const outline = turf.polygon(geometry.coordinates);
     // Independent reference: turf's point-to-polygon distance (0 inside), computed for every seeded well.
-    const expected = WELLS.filter((w) => Math.max(0, turf.pointToPolygonDistance(turf.point([w[1], w[2]]), outline, { units: 'kilometers' })) <= 10).map((w) => w[0]);
+    const expected = WELLS.filter(
+      (w) => Math.max(0, turf.pointToPolygonDistance(turf.point([w[1], w[2]]), outline, { units: 'kilometers' })) <= 10,
+    ).map((w) => w[0]);
     expect(res.body.map((c: { name: string }) => c.name).sort()).toEqual([...expected].sort());
     for (const c of res.body) {
       const w = WELLS.find((x) => x[0] === c.name)!;
@@ -114,7 +149,9 @@ describe('planned wells and offsets', () => {
   let plannedId: string;
 
   it('estimates water depth from the nearest wells when none is entered', async () => {
-    const res = await planner.agent.post(`${base}/planned-wells`).send({ name: 'Lantern-1 (planned)', location: { type: 'Point', coordinates: [-101, -32.5] }, plannedTdM: 4000 });
+    const res = await planner.agent
+      .post(`${base}/planned-wells`)
+      .send({ name: 'Lantern-1 (planned)', location: { type: 'Point', coordinates: [-101, -32.5] }, plannedTdM: 4000 });
     expect(res.status).toBe(201);
     plannedId = res.body.id;
     expect(res.body.waterDepthSource).toBe('nearest-wells');
@@ -135,12 +172,14 @@ describe('planned wells and offsets', () => {
       const there = turf.point([w[1], w[2]]);
       // turf uses a sphere (R = 6371.0088 km), PostGIS geography the WGS 84 spheroid: agree within 0.5 %.
       expect(Math.abs(c.distanceKm / turf.distance(here, there, { units: 'kilometers' }) - 1)).toBeLessThan(0.005);
-      expect(Math.abs(((c.azimuthDeg - (turf.bearing(here, there) + 360)) % 360 + 540) % 360 - 180)).toBeLessThan(0.5);
+      expect(Math.abs(((((c.azimuthDeg - (turf.bearing(here, there) + 360)) % 360) + 540) % 360) - 180)).toBeLessThan(0.5);
       expect(c.tdCoverage).toBeCloseTo(w[4] / 4000, 9);
     }
     // Ranked: the nearest, deep, similar-water-depth well first.
     expect(res.body[0].name).toBe('NEAR-1');
-    expect(res.body.map((c: { score: number }) => c.score)).toEqual([...res.body.map((c: { score: number }) => c.score)].sort((a: number, b: number) => b - a));
+    expect(res.body.map((c: { score: number }) => c.score)).toEqual(
+      [...res.body.map((c: { score: number }) => c.score)].sort((a: number, b: number) => b - a),
+    );
   });
 
   it('refuses a radius of 0 or 5,000 km by name', async () => {
@@ -168,7 +207,13 @@ describe('planned wells and offsets', () => {
 
   it('searches within the prospect outline plus a buffer', async () => {
     const prospect = await planner.agent.post(`${base}/prospects`).send({ name: 'Tight box', geometry: square(-100.99, -32.5, 0.01) });
-    const pw = await planner.agent.post(`${base}/planned-wells`).send({ name: 'Box-1', location: { type: 'Point', coordinates: [-100.99, -32.5] }, plannedTdM: 3500, prospectId: prospect.body.id, waterDepthM: 100 });
+    const pw = await planner.agent.post(`${base}/planned-wells`).send({
+      name: 'Box-1',
+      location: { type: 'Point', coordinates: [-100.99, -32.5] },
+      plannedTdM: 3500,
+      prospectId: prospect.body.id,
+      waterDepthM: 100,
+    });
     expect(pw.body.waterDepthSource).toBe('entered');
     const res = await planner.agent.get(`${base}/planned-wells/${pw.body.id}/offset-candidates?prospectBufferKm=1`);
     expect(res.body.map((c: { name: string }) => c.name)).toEqual(['NEAR-1']);

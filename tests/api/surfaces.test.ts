@@ -23,7 +23,9 @@ describe('TOP surfaces over a demo prospect', () => {
   let surfaceId: string;
 
   it('krige the accepted TOP picks around the prospect, with contours, variogram and cross-validation', async () => {
-    const res = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 500, contourIntervalM: 50 });
+    const res = await geo
+      .post(`${base}/prospects/${prospect.id}/surfaces`)
+      .send({ wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 500, contourIntervalM: 50 });
     expect(res.status).toBe(201);
     surfaceId = res.body.id;
     expect(res.body.wellCount).toBeGreaterThanOrEqual(5);
@@ -36,9 +38,12 @@ describe('TOP surfaces over a demo prospect', () => {
   });
 
   it('kriges the residuals of a planar regional trend when asked, and stores how it was run', async () => {
-    const res = await geo
-      .post(`${base}/prospects/${prospect.id}/surfaces`)
-      .send({ wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 500, contourIntervalM: 50, method: { kind: 'kriging', model: 'exponential', trend: 'planar' } });
+    const res = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({
+      wells: { from: 'prospect', bufferKm: 30 },
+      cellSizeM: 500,
+      contourIntervalM: 50,
+      method: { kind: 'kriging', model: 'exponential', trend: 'planar' },
+    });
     expect(res.status).toBe(201);
     expect(res.body.warnings.some((w: string) => w.startsWith('A planar regional trend was removed before kriging'))).toBe(true);
     const again = await geo.get(`${base}/surfaces/${res.body.id}`);
@@ -84,8 +89,12 @@ describe('TOP surfaces over a demo prospect', () => {
     const wells = (await geo.get(`${base}/wells?limit=2`)).body.items.map((w: { id: string }) => w.id);
     const few = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ wells: { from: 'list', wellIds: wells } });
     expect(few.status).toBe(400);
-    expect(few.body.error.message).toMatch(/^A surface needs at least 3 wells with an accepted TOP pick; \d of the 2 wells found have one\.$/);
-    const fine = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 25, extentBufferKm: 50 });
+    expect(few.body.error.message).toMatch(
+      /^A surface needs at least 3 wells with an accepted TOP pick; \d of the 2 wells found have one\.$/,
+    );
+    const fine = await geo
+      .post(`${base}/prospects/${prospect.id}/surfaces`)
+      .send({ wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 25, extentBufferKm: 50 });
     expect(fine.status).toBe(400);
     expect(fine.body.error.message).toMatch(/exceeds the limit of 250000: choose a larger cell size/);
     const none = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ wells: { from: 'prospect', bufferKm: 0 } });
@@ -112,7 +121,9 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
   const storedCount = async () => (await geo.get(`${base}/prospects/${prospect.id}/surfaces`)).body.length;
 
   it('maps the pore-pressure EMW at 3000 m TVDSS from each well’s logs, within the normal-brine and overburden EMW', async () => {
-    const res = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ quantity: 'emw_at_depth', depthTvdssM: 3000, wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 500 });
+    const res = await geo
+      .post(`${base}/prospects/${prospect.id}/surfaces`)
+      .send({ quantity: 'emw_at_depth', depthTvdssM: 3000, wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 500 });
     expect(res.status).toBe(201);
     expect(res.body.unit).toBe('kg/m3');
     expect(res.body.depthTvdssM).toBe(3000);
@@ -152,7 +163,13 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
   });
 
   it('maps overpressure: about zero above the top of overpressure, positive deep', async () => {
-    const shallow = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ quantity: 'overpressure_at_depth', depthTvdssM: 1200, wells: { from: 'prospect', bufferKm: 30 }, method: { kind: 'idw', power: 2 }, cellSizeM: 1000 });
+    const shallow = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({
+      quantity: 'overpressure_at_depth',
+      depthTvdssM: 1200,
+      wells: { from: 'prospect', bufferKm: 30 },
+      method: { kind: 'idw', power: 2 },
+      cellSizeM: 1000,
+    });
     expect(shallow.status).toBe(201);
     expect(shallow.body.unit).toBe('Pa');
     // The demo TOP picks lie at 1960–3630 m TVDSS: at 1200 m every well is normally pressured, within the noise of an
@@ -162,7 +179,9 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
       expect(w.value).toBeLessThan(0.45e6);
       expect(w.value).toBeCloseTo(w.atDepth.porePa - w.atDepth.hydrostaticPa, 3);
     }
-    const deep = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ quantity: 'overpressure_at_depth', depthTvdssM: 3800, wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 1000 });
+    const deep = await geo
+      .post(`${base}/prospects/${prospect.id}/surfaces`)
+      .send({ quantity: 'overpressure_at_depth', depthTvdssM: 3800, wells: { from: 'prospect', bufferKm: 30 }, cellSizeM: 1000 });
     expect(deep.status).toBe(201);
     const deepWells = deep.body.wells as RunWell[];
     expect(deepWells.length).toBeGreaterThanOrEqual(3);
@@ -185,10 +204,14 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
 
   it('refuses a depth deeper than any log with a clear message naming the field, and stores nothing', async () => {
     const before = await storedCount();
-    const res = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ quantity: 'emw_at_depth', depthTvdssM: 9000, wells: { from: 'prospect', bufferKm: 30 } });
+    const res = await geo
+      .post(`${base}/prospects/${prospect.id}/surfaces`)
+      .send({ quantity: 'emw_at_depth', depthTvdssM: 9000, wells: { from: 'prospect', bufferKm: 30 } });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('depth_beyond_logs');
-    expect(res.body.error.message).toMatch(/^depthTvdssM: no well's pore-pressure curve reaches 9,000 m TVDSS \(the deepest ends at [\d,]+ m TVDSS in .+\); choose a shallower depth\.$/);
+    expect(res.body.error.message).toMatch(
+      /^depthTvdssM: no well's pore-pressure curve reaches 9,000 m TVDSS \(the deepest ends at [\d,]+ m TVDSS in .+\); choose a shallower depth\.$/,
+    );
     const missing = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ quantity: 'overpressure_at_depth' });
     expect(missing.status).toBe(400);
     expect(missing.body.error.message).toContain('depthTvdssM: is required for overpressure_at_depth');
@@ -196,10 +219,16 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
   });
 
   it('maps the TOP below the mudline offshore and below the ground onshore', async () => {
-    const tvdss = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ wells: { from: 'prospect', bufferKm: 30 }, method: { kind: 'idw', power: 2 }, cellSizeM: 1000 });
+    const tvdss = await geo
+      .post(`${base}/prospects/${prospect.id}/surfaces`)
+      .send({ wells: { from: 'prospect', bufferKm: 30 }, method: { kind: 'idw', power: 2 }, cellSizeM: 1000 });
     const offshore = (tvdss.body.wells as RunWell[]).slice(0, 3);
     // An onshore well beside them: rig floor 310 m above sea level, ground at 302 m, TOP picked 2500 m below the rig floor.
-    const [{ content }] = (await ctx.db.execute<{ content: unknown }>(sql`SELECT content FROM interpretations WHERE well_id = ${offshore[0].wellId} AND status = 'accepted' LIMIT 1`)).rows;
+    const [{ content }] = (
+      await ctx.db.execute<{ content: unknown }>(
+        sql`SELECT content FROM interpretations WHERE well_id = ${offshore[0].wellId} AND status = 'accepted' LIMIT 1`,
+      )
+    ).rows;
     const [sw, , ne] = tvdss.body.grid.cornersLonLat;
     const [lon, lat] = [(sw[0] + ne[0]) / 2, (sw[1] + ne[1]) / 2];
     const [land] = (
@@ -208,14 +237,28 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
         VALUES (${ctx.demoTeamId}, 'Test onshore well (surfaces)', ST_SetSRID(ST_MakePoint(${lon}, ${lat}), 4326), ${lon}, ${lat}, 310, 302, false) RETURNING id`)
     ).rows;
     try {
-      await ctx.db.execute(sql`INSERT INTO interpretations (well_id, version, status, content) VALUES (${land.id}, 1, 'accepted', ${JSON.stringify({ ...(content as object), top: { ...(content as { top: object }).top, tvdM: 2500 } })}::jsonb)`);
-      const res = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ quantity: 'top_below_mudline', wells: { from: 'list', wellIds: [...offshore.map((w) => w.wellId), land.id] }, method: { kind: 'idw', power: 2 }, cellSizeM: 1000 });
+      await ctx.db.execute(
+        sql`INSERT INTO interpretations (well_id, version, status, content) VALUES (${land.id}, 1, 'accepted', ${JSON.stringify({ ...(content as object), top: { ...(content as { top: object }).top, tvdM: 2500 } })}::jsonb)`,
+      );
+      const res = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({
+        quantity: 'top_below_mudline',
+        wells: { from: 'list', wellIds: [...offshore.map((w) => w.wellId), land.id] },
+        method: { kind: 'idw', power: 2 },
+        cellSizeM: 1000,
+      });
       expect(res.status).toBe(201);
       expect(res.body.unit).toBe('m');
       const byId = new Map((res.body.wells as RunWell[]).map((w) => [w.wellId, w.value]));
       // Onshore: 2500 m below the rig floor, which stands 310 − 302 = 8 m above the ground.
       expect(byId.get(land.id)).toBeCloseTo(2492, 9);
-      const water = (await ctx.db.execute<{ id: string; water_depth_m: number }>(sql`SELECT id, water_depth_m FROM wells WHERE id IN (${sql.join(offshore.map((w) => sql`${w.wellId}::uuid`), sql`, `)})`)).rows;
+      const water = (
+        await ctx.db.execute<{ id: string; water_depth_m: number }>(
+          sql`SELECT id, water_depth_m FROM wells WHERE id IN (${sql.join(
+            offshore.map((w) => sql`${w.wellId}::uuid`),
+            sql`, `,
+          )})`,
+        )
+      ).rows;
       for (const w of water) {
         // Offshore: below sea level less the water depth.
         const top = offshore.find((o) => o.wellId === w.id)!.value;
@@ -229,7 +272,9 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
 
   it('reads the value ± standard deviation at a clicked point, and nothing outside the grid', async () => {
     const variogram = { model: 'exponential', nugget: 0, sill: 90_000, range: 20_000 };
-    const res = await geo.post(`${base}/prospects/${prospect.id}/surfaces`).send({ wells: { from: 'prospect', bufferKm: 30 }, method: { kind: 'kriging', model: 'exponential', variogram }, cellSizeM: 250 });
+    const res = await geo
+      .post(`${base}/prospects/${prospect.id}/surfaces`)
+      .send({ wells: { from: 'prospect', bufferKm: 30 }, method: { kind: 'kriging', model: 'exponential', variogram }, cellSizeM: 250 });
     expect(res.status).toBe(201);
     // A hand-set variogram is used as given, not fitted.
     expect(res.body.variogram.fitted).toBe(false);
@@ -237,7 +282,9 @@ describe('surfaces of pore pressure at a depth over the demo prospect', () => {
     expect(res.body.method).toBe('ordinary kriging (exponential)');
     const { grid } = res.body;
     // At a cell centre the bilinear read is that cell's value and standard deviation.
-    const k = grid.values.findIndex((v: number | null, idx: number) => v !== null && grid.values[idx + 1] !== null && grid.values[idx + grid.nx] !== null);
+    const k = grid.values.findIndex(
+      (v: number | null, idx: number) => v !== null && grid.values[idx + 1] !== null && grid.values[idx + grid.nx] !== null,
+    );
     const [x, y] = [grid.x0 + (k % grid.nx) * grid.cellSizeM, grid.y0 + Math.floor(k / grid.nx) * grid.cellSizeM];
     const [lon, lat] = proj4(grid.projection, 'EPSG:4326').forward([x, y]);
     const v = await geo.get(`${base}/surfaces/${res.body.id}/value`).query({ lon, lat });

@@ -39,7 +39,10 @@ beforeAll(async () => {
   const rows = ['name,lon,lat'];
   for (let i = 0; i < 30; i++) rows.push(`T-${i},${(-101 + (i % 6) * 0.005).toFixed(4)},${(-32.5 + Math.floor(i / 6) * 0.005).toFixed(4)}`);
   rows.push('LONE-1,-100.5,-32.2');
-  const res = await team.agent.post(`${base}/imports`).field('kind', 'wells').attach('file', Buffer.from(rows.join('\n')), 'tiles.csv');
+  const res = await team.agent
+    .post(`${base}/imports`)
+    .field('kind', 'wells')
+    .attach('file', Buffer.from(rows.join('\n')), 'tiles.csv');
   expect(res.status).toBe(201);
 });
 afterAll(() => ctx.close());
@@ -80,8 +83,16 @@ describe('team vector tiles from PostGIS', () => {
     expect(empty.status).toBe(204);
     const planner = await memberAgent(ctx, team.teamId, 'planner');
     const d = 0.01;
-    const ring = [[-101 - d, -32.5 - d], [-101 + d, -32.5 - d], [-101 + d, -32.5 + d], [-101 - d, -32.5 + d], [-101 - d, -32.5 - d]];
-    const created = await planner.agent.post(`${base}/prospects`).send({ name: 'Tile box', geometry: { type: 'Polygon', coordinates: [ring] } });
+    const ring = [
+      [-101 - d, -32.5 - d],
+      [-101 + d, -32.5 - d],
+      [-101 + d, -32.5 + d],
+      [-101 - d, -32.5 + d],
+      [-101 - d, -32.5 - d],
+    ];
+    const created = await planner.agent
+      .post(`${base}/prospects`)
+      .send({ name: 'Tile box', geometry: { type: 'Polygon', coordinates: [ring] } });
     expect(created.status).toBe(201);
     const after = await getTile(team.agent, 'prospects', 10, -101, -32.5);
     expect(after.status).toBe(200);

@@ -47,7 +47,9 @@ describe('team scoping', () => {
 
   it('refuses a role that lacks the action (viewer inviting, planner reading the outbox) with 403', async () => {
     const viewer = await signedInAgent(ctx, 'viewer@porelith.example');
-    const invite = await viewer.post(`/api/teams/${ctx.demoTeamId}/invitations`).send({ email: 'x@porelith.example', name: 'X', role: 'viewer' });
+    const invite = await viewer
+      .post(`/api/teams/${ctx.demoTeamId}/invitations`)
+      .send({ email: 'x@porelith.example', name: 'X', role: 'viewer' });
     expect(invite.status).toBe(403);
     const planner = await signedInAgent(ctx, 'planner@porelith.example');
     const outbox = await planner.get(`/api/teams/${ctx.demoTeamId}/outbox`);
@@ -88,9 +90,15 @@ describe('an invitation whose mail cannot be sent', () => {
     const down = { send: async () => Promise.reject(new Error('connect ECONNREFUSED 127.0.0.1:1')) };
     const [admin] = await ctx.db.select({ id: users.id }).from(users).where(eq(users.email, 'admin@porelith.example'));
     const email = `unreachable-${Date.now()}@example.org`;
-    const err = await inviteMember(ctx.db, down as never, 'http://127.0.0.1', ctx.demoTeamId, admin.id, { email, name: 'Nobody', role: 'viewer' }).catch((e) => e);
+    const err = await inviteMember(ctx.db, down as never, 'http://127.0.0.1', ctx.demoTeamId, admin.id, {
+      email,
+      name: 'Nobody',
+      role: 'viewer',
+    }).catch((e) => e);
     expect(err).toMatchObject({ status: 502, code: 'mail_failed' });
-    expect(err.message).toContain(`The invitation to ${email} could not be e-mailed (connect ECONNREFUSED 127.0.0.1:1); nothing was saved.`);
+    expect(err.message).toContain(
+      `The invitation to ${email} could not be e-mailed (connect ECONNREFUSED 127.0.0.1:1); nothing was saved.`,
+    );
     expect(await ctx.db.select().from(invitations).where(eq(invitations.email, email))).toEqual([]);
   });
 });
@@ -122,7 +130,10 @@ describe('pending invitations', () => {
     const used = await invite(admin, ctx.demoTeamId);
     await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: used.token, password: 'pending-password-1' }).expect(200);
     const expired = await invite(admin, ctx.demoTeamId);
-    await ctx.db.update(invitations).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(invitations.id, expired.id));
+    await ctx.db
+      .update(invitations)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(invitations.id, expired.id));
     const ids = (await admin.get(`/api/teams/${ctx.demoTeamId}/invitations`)).body.map((i: { id: string }) => i.id);
     expect(ids).toContain(inv.id);
     expect(ids).not.toContain(used.id);
@@ -169,7 +180,9 @@ describe('pending invitations', () => {
     const fresh = linkToken(mail.textBody, '/accept-invite');
     expect(fresh).not.toBe(inv.token);
     expect((await supertest(ctx.app).get(`/api/auth/invitations/${inv.token}`)).status).toBe(404);
-    expect((await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: inv.token, password: 'resent-password-1' })).status).toBe(400);
+    expect(
+      (await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: inv.token, password: 'resent-password-1' })).status,
+    ).toBe(400);
     const ok = await supertest(ctx.app).post('/api/auth/accept-invite').send({ token: fresh, password: 'resent-password-1' });
     expect(ok.status).toBe(200);
     expect(ok.body.memberships).toEqual([{ teamId: ctx.demoTeamId, teamName: 'Synthetic demo', role: 'geoscientist' }]);

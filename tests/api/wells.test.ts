@@ -11,7 +11,10 @@ beforeAll(async () => {
   ctx = await startTestApp();
   team = await freshTeamAgent(ctx, 'Wells API tests', 'geoscientist');
   base = `/api/teams/${team.teamId}`;
-  const res = await team.agent.post(`${base}/imports`).field('kind', 'wells').attach('file', readFileSync('tests/fixtures/imports/wells-good.csv'), 'w.csv');
+  const res = await team.agent
+    .post(`${base}/imports`)
+    .field('kind', 'wells')
+    .attach('file', readFileSync('tests/fixtures/imports/wells-good.csv'), 'w.csv');
   expect(res.status).toBe(201);
 });
 afterAll(() => ctx.close());

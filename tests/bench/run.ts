@@ -12,7 +12,9 @@ import type { BenchSection, Row } from './helpers/types';
 async function main(): Promise<void> {
   const filter = process.argv[2]?.toLowerCase();
   const dir = join(dirname(fileURLToPath(import.meta.url)), 'sections');
-  const files = readdirSync(dir).filter((f) => f.endsWith('.ts')).sort();
+  const files = readdirSync(dir)
+    .filter((f) => f.endsWith('.ts'))
+    .sort();
   const results: { name: string; rows: Row[] }[] = [];
   const started = performance.now();
   for (const file of files) {

@@ -14,11 +14,21 @@ afterAll(async () => {
   // The planned well this test placed goes again, so the demo team stays as seeded.
   if (plannedWellId && e) {
     const teamId = e.ctx.demoTeamId;
-    await e.page.evaluate(({ t, id }) => fetch(`/api/teams/${t}/planned-wells/${id}`, { method: 'DELETE' }).then((r) => r.status), { t: teamId, id: plannedWellId }).catch(() => null);
+    await e.page
+      .evaluate(({ t, id }) => fetch(`/api/teams/${t}/planned-wells/${id}`, { method: 'DELETE' }).then((r) => r.status), {
+        t: teamId,
+        id: plannedWellId,
+      })
+      .catch(() => null);
   }
   // Likewise a reference layer left behind by a failed run of the upload test.
   if (referenceLayerId && e) {
-    await e.page.evaluate(({ t, id }) => fetch(`/api/teams/${t}/layers/${id}`, { method: 'DELETE' }).then((r) => r.status), { t: e.ctx.demoTeamId, id: referenceLayerId }).catch(() => null);
+    await e.page
+      .evaluate(({ t, id }) => fetch(`/api/teams/${t}/layers/${id}`, { method: 'DELETE' }).then((r) => r.status), {
+        t: e.ctx.demoTeamId,
+        id: referenceLayerId,
+      })
+      .catch(() => null);
   }
   await e?.close();
 });
@@ -51,7 +61,13 @@ describe('the Atlas through the page', () => {
 
     // The map frames the team's wells: every well is drawn, alone or inside a cluster count.
     await settled(page);
-    const total = await page.evaluate((t) => fetch(`/api/teams/${t}/wells?limit=1`).then((r) => r.json()).then((b) => b.total as number), teamId);
+    const total = await page.evaluate(
+      (t) =>
+        fetch(`/api/teams/${t}/wells?limit=1`)
+          .then((r) => r.json())
+          .then((b) => b.total as number),
+      teamId,
+    );
     expect(total).toBeGreaterThan(10);
     await expect.poll(async () => Number(await attr(page, 'data-well-count')), { timeout: 20_000 }).toBe(total);
     expect(await page.getByTestId('demo-data-label').textContent()).toContain('Synthetic demo data');
@@ -64,7 +80,10 @@ describe('the Atlas through the page', () => {
 
     // Search a well by name: the map flies to it and its card opens.
     const first = await page.evaluate(
-      (t) => fetch(`/api/teams/${t}/wells?limit=1&sort=name`).then((r) => r.json()).then((b) => b.items[0] as { id: string; name: string }),
+      (t) =>
+        fetch(`/api/teams/${t}/wells?limit=1&sort=name`)
+          .then((r) => r.json())
+          .then((b) => b.items[0] as { id: string; name: string }),
       teamId,
     );
     await page.getByTestId('map-search-input').fill(first.name);
@@ -199,7 +218,10 @@ describe('the Atlas through the page', () => {
     const teamId = e.ctx.demoTeamId;
     // The planner's planned well goes now: the geoscientist signed in below may not delete it.
     if (plannedWellId) {
-      const status = await page.evaluate(({ t, id }) => fetch(`/api/teams/${t}/planned-wells/${id}`, { method: 'DELETE' }).then((r) => r.status), { t: teamId, id: plannedWellId });
+      const status = await page.evaluate(
+        ({ t, id }) => fetch(`/api/teams/${t}/planned-wells/${id}`, { method: 'DELETE' }).then((r) => r.status),
+        { t: teamId, id: plannedWellId },
+      );
       expect(status).toBe(204);
       plannedWellId = null;
     }
@@ -214,15 +236,38 @@ describe('the Atlas through the page', () => {
     await settled(page);
 
     // A block over the middle of the demo wells, so it sits where the map opens.
-    const wells = await page.evaluate((t) => fetch(`/api/teams/${t}/wells?limit=500`).then((r) => r.json()).then((b) => b.items as { lon: number; lat: number }[]), teamId);
+    const wells = await page.evaluate(
+      (t) =>
+        fetch(`/api/teams/${t}/wells?limit=500`)
+          .then((r) => r.json())
+          .then((b) => b.items as { lon: number; lat: number }[]),
+      teamId,
+    );
     const lons = wells.map((w) => w.lon);
     const lats = wells.map((w) => w.lat);
     const [cx, cy] = [(Math.min(...lons) + Math.max(...lons)) / 2, (Math.min(...lats) + Math.max(...lats)) / 2];
     const [hx, hy] = [(Math.max(...lons) - Math.min(...lons)) / 5, (Math.max(...lats) - Math.min(...lats)) / 5];
-    const ring = [[cx - hx, cy - hy], [cx + hx, cy - hy], [cx + hx, cy + hy], [cx - hx, cy + hy], [cx - hx, cy - hy]];
-    const bowTie = [[cx - hx, cy - hy], [cx + hx, cy + hy], [cx + hx, cy - hy], [cx - hx, cy + hy], [cx - hx, cy - hy]];
+    const ring = [
+      [cx - hx, cy - hy],
+      [cx + hx, cy - hy],
+      [cx + hx, cy + hy],
+      [cx - hx, cy + hy],
+      [cx - hx, cy - hy],
+    ];
+    const bowTie = [
+      [cx - hx, cy - hy],
+      [cx + hx, cy + hy],
+      [cx + hx, cy - hy],
+      [cx - hx, cy + hy],
+      [cx - hx, cy - hy],
+    ];
     const collection = (coordinates: number[][], name: string) =>
-      Buffer.from(JSON.stringify({ type: 'FeatureCollection', features: [{ type: 'Feature', properties: { name }, geometry: { type: 'Polygon', coordinates: [coordinates] } }] }));
+      Buffer.from(
+        JSON.stringify({
+          type: 'FeatureCollection',
+          features: [{ type: 'Feature', properties: { name }, geometry: { type: 'Polygon', coordinates: [coordinates] } }],
+        }),
+      );
 
     await page.getByTestId('reference-add').click();
     const dialog = page.getByTestId('reference-upload');
@@ -232,17 +277,23 @@ describe('the Atlas through the page', () => {
     await expect.poll(() => dialog.textContent()).toContain('File is required');
 
     // A self-intersecting outline: the server's own words come back, naming the feature.
-    await page.getByTestId('reference-file').setInputFiles({ name: 'bad-blocks.geojson', mimeType: 'application/geo+json', buffer: collection(bowTie, 'Twisted') });
+    await page
+      .getByTestId('reference-file')
+      .setInputFiles({ name: 'bad-blocks.geojson', mimeType: 'application/geo+json', buffer: collection(bowTie, 'Twisted') });
     const name = `E2E licence blocks, northern shelf ${Date.now().toString(36)}`;
     await page.getByTestId('reference-name').locator('input').fill(name);
     await page.getByTestId('reference-upload-submit').click();
     const error = page.getByTestId('reference-upload-error');
     await error.waitFor({ timeout: 10_000 });
-    expect(await error.textContent()).toMatch(/Feature 1 \("Twisted"\) is not a valid geometry: its outline crosses itself near lon -?[\d.]+, lat -?[\d.]+\./);
+    expect(await error.textContent()).toMatch(
+      /Feature 1 \("Twisted"\) is not a valid geometry: its outline crosses itself near lon -?[\d.]+, lat -?[\d.]+\./,
+    );
     await page.screenshot({ path: join(ARTIFACTS, 'atlas-reference-error.png') });
 
     // The good file goes in, the dialog closes, and the layer is listed switched on.
-    await page.getByTestId('reference-file').setInputFiles({ name: 'blocks.geojson', mimeType: 'application/geo+json', buffer: collection(ring, 'Block E-7') });
+    await page
+      .getByTestId('reference-file')
+      .setInputFiles({ name: 'blocks.geojson', mimeType: 'application/geo+json', buffer: collection(ring, 'Block E-7') });
     await page.getByTestId('reference-upload-submit').click();
     const row = page.getByTestId('reference-layer').filter({ hasText: name });
     await row.waitFor({ timeout: 15_000 });

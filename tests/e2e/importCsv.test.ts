@@ -15,7 +15,9 @@ afterAll(() => e?.close());
  */
 async function screenshot(name: string): Promise<void> {
   const { page } = e;
-  const height = await page.evaluate(() => Math.max(...Array.from(document.querySelectorAll('main.page'), (m) => m.scrollHeight + 140), 800));
+  const height = await page.evaluate(() =>
+    Math.max(...Array.from(document.querySelectorAll('main.page'), (m) => m.scrollHeight + 140), 800),
+  );
   await page.setViewportSize({ width: 1366, height: Math.min(height, 4000) });
   await page.waitForTimeout(150);
   await page.screenshot({ path: join(ARTIFACTS, name) });
@@ -52,7 +54,9 @@ describe('importing well headers from a CSV file through the page', () => {
     expect(await fieldOf('Well Name')).toBe('name');
     expect(await fieldOf('Longitude')).toBe('x');
     expect(await fieldOf('Water depth (ft)')).toBe('waterDepth');
-    expect(await page.locator('[data-testid="mapping-row"][data-column="Water depth (ft)"] [data-testid="mapping-unit"]').textContent()).toContain('ft');
+    expect(
+      await page.locator('[data-testid="mapping-row"][data-column="Water depth (ft)"] [data-testid="mapping-unit"]').textContent(),
+    ).toContain('ft');
     expect(await page.getByTestId('csv-delimiter').textContent()).toContain('comma');
     expect(await page.getByTestId('count-valid').textContent()).toBe('2');
     expect(await page.getByTestId('count-invalid').textContent()).toBe('1');
@@ -81,7 +85,10 @@ describe('importing well headers from a CSV file through the page', () => {
     await page.waitForURL(/\/wells/);
     await page.getByTestId('wells-search').locator('input').fill(prefix);
     await expect.poll(() => page.getByTestId('well-row').count(), { timeout: 10_000 }).toBe(2);
-    expect(await page.getByTestId('well-row').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-name')))).toEqual([`${prefix}-1`, `${prefix}-3`]);
+    expect(await page.getByTestId('well-row').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-name')))).toEqual([
+      `${prefix}-1`,
+      `${prefix}-3`,
+    ]);
     expect(page.url()).toContain(`q=${prefix}`);
     expect(await page.getByTestId('demo-data-tag').count()).toBe(1);
     await screenshot('wells-table.png');

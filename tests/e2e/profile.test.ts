@@ -11,7 +11,9 @@ afterAll(() => e?.close());
 /** The whole page: the shell scrolls inside its layout, so the viewport is stretched to the content for the shot. */
 async function screenshot(name: string): Promise<void> {
   const { page } = e;
-  const height = await page.evaluate(() => Math.max(...Array.from(document.querySelectorAll('main.page')).map((m) => m.scrollHeight + 140), 800));
+  const height = await page.evaluate(() =>
+    Math.max(...Array.from(document.querySelectorAll('main.page')).map((m) => m.scrollHeight + 140), 800),
+  );
   await page.setViewportSize({ width: 1366, height: Math.min(height, 4000) });
   await page.waitForTimeout(250);
   await page.screenshot({ path: join(ARTIFACTS, name) });
@@ -136,7 +138,10 @@ describe('the well pressure-profile workspace', () => {
     expect(await page.getByTestId('profile-figure').locator('svg').getAttribute('data-view')).toBe('emw'); // remembered
     await openTab('versions');
     expect(await page.getByTestId('version-row').first().textContent()).toContain('Tomas Brennick');
-    const server = await page.evaluate(async ([t, w]) => (await fetch(`/api/teams/${t}/wells/${w}/interpretations/current`)).json(), [teamId, well.id]);
+    const server = await page.evaluate(
+      async ([t, w]) => (await fetch(`/api/teams/${t}/wells/${w}/interpretations/current`)).json(),
+      [teamId, well.id],
+    );
     expect(server.version).toBe(Number(saved));
     expect(server.top.method).toBe('auto');
     expect(server.trend.fromM).toBe(fromM);
@@ -150,7 +155,16 @@ describe('the well pressure-profile workspace', () => {
         await fetch(`/api/teams/${t}/wells/${w}/interpretations`, {
           method: 'POST',
           headers: { 'Content-Type': 'application/json' },
-          body: JSON.stringify({ normalDensityKgM3: cur.normalDensityKgM3, trend: cur.trend, pore: cur.pore, fracture: cur.fracture, top: cur.top, baseVersion: v, status: 'draft', note: 'someone else' }),
+          body: JSON.stringify({
+            normalDensityKgM3: cur.normalDensityKgM3,
+            trend: cur.trend,
+            pore: cur.pore,
+            fracture: cur.fracture,
+            top: cur.top,
+            baseVersion: v,
+            status: 'draft',
+            note: 'someone else',
+          }),
         });
       },
       [teamId, well.id, Number(saved)] as const,
@@ -174,7 +188,9 @@ describe('the well pressure-profile workspace', () => {
     await page.goto(`${baseUrl}/compare?wells=${well.id},${other.id}`);
     await page.getByTestId('compare-figure').waitFor({ timeout: 30_000 });
     await expect.poll(() => page.getByTestId('compare-row').count(), { timeout: 30_000 }).toBe(2);
-    expect(await page.locator(`[data-testid="compare-row"][data-well="${well.name}"] [data-testid="compare-top-depth"]`).textContent()).toMatch(/^[\d,]+/);
+    expect(
+      await page.locator(`[data-testid="compare-row"][data-well="${well.name}"] [data-testid="compare-top-depth"]`).textContent(),
+    ).toMatch(/^[\d,]+/);
     expect(await page.getByTestId('compare-top').count()).toBeGreaterThanOrEqual(1);
     await screenshot('compare.png');
 

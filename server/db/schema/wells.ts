@@ -1,17 +1,5 @@
 import { sql } from 'drizzle-orm';
-import {
-  boolean,
-  date,
-  doublePrecision,
-  index,
-  integer,
-  jsonb,
-  pgEnum,
-  pgTable,
-  text,
-  uniqueIndex,
-  uuid,
-} from 'drizzle-orm/pg-core';
+import { boolean, date, doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { WELL_STATUSES } from '../../../shared/schemas/wells';
 import { createdAt, id, updatedAt } from './columns';
 import { pointGeometry } from './geometry';
@@ -65,7 +53,9 @@ export const wells = pgTable(
   (t) => [
     index('wells_location_gist').using('gist', t.location),
     index().on(t.teamId, t.name),
-    uniqueIndex('wells_team_uwi_unique').on(t.teamId, t.uwi).where(sql`${t.uwi} IS NOT NULL`),
+    uniqueIndex('wells_team_uwi_unique')
+      .on(t.teamId, t.uwi)
+      .where(sql`${t.uwi} IS NOT NULL`),
     uniqueIndex('wells_team_name_unique').on(t.teamId, t.name),
   ],
 );

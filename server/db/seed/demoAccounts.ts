@@ -36,7 +36,14 @@ export async function demoAccountsExist(db: Db): Promise<boolean> {
   const rows = await db
     .select({ id: users.id })
     .from(users)
-    .where(and(inArray(users.email, DEMO_USERS.map((u) => u.email))))
+    .where(
+      and(
+        inArray(
+          users.email,
+          DEMO_USERS.map((u) => u.email),
+        ),
+      ),
+    )
     .limit(1);
   return rows.length > 0;
 }

@@ -54,7 +54,10 @@ function limiter(env: Env, o: LimitOptions): RequestHandler {
       const minutes = Math.max(1, Math.ceil(msLeft / 60_000));
       const whose = o.perAccount ? 'for this account from this address' : 'from this address';
       res.status(429).json({
-        error: { code: 'rate_limited', message: `Too many ${o.what} attempts ${whose}; try again in ${minutes} minute${minutes === 1 ? '' : 's'}.` },
+        error: {
+          code: 'rate_limited',
+          message: `Too many ${o.what} attempts ${whose}; try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`,
+        },
       });
     },
   });

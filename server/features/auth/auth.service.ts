@@ -22,13 +22,23 @@ const invalidToken = () =>
 // Same code as any dead link (the client treats them alike), but the message says what to do next. A submit
 // with the link is a 400; opening it (nothing sent yet) is a 410, like a used link.
 const expiredInvitation = (status: 400 | 410 = 400) =>
-  new HttpError(status, 'invalid_token', `This invitation link has expired (links last ${INVITE_DAYS} days); ask your team admin to invite you again.`, {
-    reason: 'expired',
-  });
+  new HttpError(
+    status,
+    'invalid_token',
+    `This invitation link has expired (links last ${INVITE_DAYS} days); ask your team admin to invite you again.`,
+    {
+      reason: 'expired',
+    },
+  );
 const expiredReset = (status: 400 | 410 = 400) =>
-  new HttpError(status, 'invalid_token', `This password-reset link has expired (links last ${RESET_MINUTES} minutes); ask for a new one from the sign-in page.`, {
-    reason: 'expired',
-  });
+  new HttpError(
+    status,
+    'invalid_token',
+    `This password-reset link has expired (links last ${RESET_MINUTES} minutes); ask for a new one from the sign-in page.`,
+    {
+      reason: 'expired',
+    },
+  );
 const existingAccountPassword = (email: string) =>
   new HttpError(
     401,
@@ -180,7 +190,8 @@ export async function acceptInvitation(db: Db, token: string, password: string):
         .onConflictDoNothing({ target: users.email })
         .returning({ id: users.id });
       // The account appeared since the check above; never overwrite it, the person can simply retry.
-      if (!created) throw conflict('An account for this e-mail was created meanwhile; open the link again and enter that account’s password.');
+      if (!created)
+        throw conflict('An account for this e-mail was created meanwhile; open the link again and enter that account’s password.');
       userId = created.id;
     }
     await tx
@@ -193,10 +204,16 @@ export async function acceptInvitation(db: Db, token: string, password: string):
 
 // Opening a link: 404 when it never existed (or was revoked), 410 when it was used or has expired.
 const unknownLink = (what: string) =>
-  new HttpError(404, 'invalid_token', `This ${what} link is not valid: it may be mistyped, or it was withdrawn or replaced by a newer one.`, {
-    reason: 'unknown',
-  });
-const usedLink = (what: string) => new HttpError(410, 'invalid_token', `This ${what} link was used already; each link works once.`, { reason: 'used' });
+  new HttpError(
+    404,
+    'invalid_token',
+    `This ${what} link is not valid: it may be mistyped, or it was withdrawn or replaced by a newer one.`,
+    {
+      reason: 'unknown',
+    },
+  );
+const usedLink = (what: string) =>
+  new HttpError(410, 'invalid_token', `This ${what} link was used already; each link works once.`, { reason: 'used' });
 
 /**
  * What an invitation link says when opened, before any password is typed; nothing is written.

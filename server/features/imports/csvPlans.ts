@@ -79,7 +79,11 @@ export interface PlanResult<T> {
 /** A depth below the well's TD is usually a unit or well mix-up, yet may be real (TD not updated): warn, don't block. */
 function warnBelowTd(well: { name: string; tdMdM?: number | null }, mdM: number, line: number, warnings: Problem[]) {
   if (well.tdMdM == null || !(mdM > well.tdMdM + 0.01)) return;
-  warnings.push({ line, column: 'md', message: `MD ${mdM.toFixed(1)} m is deeper than the TD of well "${well.name}" (${well.tdMdM.toFixed(1)} m MD): check the depth, its unit, or the well's TD` });
+  warnings.push({
+    line,
+    column: 'md',
+    message: `MD ${mdM.toFixed(1)} m is deeper than the TD of well "${well.name}" (${well.tdMdM.toFixed(1)} m MD): check the depth, its unit, or the well's TD`,
+  });
 }
 
 const str = (v: unknown) => (v === null || v === undefined ? null : String(v));
@@ -97,7 +101,12 @@ function resolveWell(r: MappedRecord, lookup: WellLookup, problems: Problem[], c
  * `rejected` are the records the field mapping already refused (bad cells left null): they are checked
  * too, so a row's coordinate problem is listed with its bad date rather than after it is fixed.
  */
-export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEpsg: number, rejected: MappedRecord[] = []): PlanResult<WellPlanRow[]> {
+export function planWells(
+  records: MappedRecord[],
+  lookup: WellLookup,
+  defaultEpsg: number,
+  rejected: MappedRecord[] = [],
+): PlanResult<WellPlanRow[]> {
   const problems: Problem[] = [];
   const invalid: number[] = [];
   const rows: WellPlanRow[] = [];
@@ -112,7 +121,12 @@ export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEp
     for (const key of [name.toLowerCase(), uwi?.toLowerCase()]) {
       if (!key) continue;
       const first = firstLineOf.get(key);
-      if (first !== undefined) lineProblems.push({ line: r.line, column: key === uwi?.toLowerCase() ? 'uwi' : 'name', message: `duplicate well "${key === uwi?.toLowerCase() ? uwi : name}" (first at line ${first})` });
+      if (first !== undefined)
+        lineProblems.push({
+          line: r.line,
+          column: key === uwi?.toLowerCase() ? 'uwi' : 'name',
+          message: `duplicate well "${key === uwi?.toLowerCase() ? uwi : name}" (first at line ${first})`,
+        });
     }
     const epsg = num(v.epsg) ?? defaultEpsg;
     const x = v.x as number;
@@ -137,11 +151,13 @@ export function planWells(records: MappedRecord[], lookup: WellLookup, defaultEp
       lineProblems.push({ line: r.line, column: 'uwi', message: `UWI "${uwi}" belongs to well "${byUwi.name}", not "${name}"` });
     }
     const waterDepthM = num(v.waterDepth);
-    if (waterDepthM !== null && waterDepthM < 0) lineProblems.push({ line: r.line, column: 'waterDepth', message: 'water depth cannot be negative' });
+    if (waterDepthM !== null && waterDepthM < 0)
+      lineProblems.push({ line: r.line, column: 'waterDepth', message: 'water depth cannot be negative' });
     const tdMdM = num(v.tdMd);
     const tdTvdM = num(v.tdTvd);
     if (tdMdM !== null && tdMdM <= 0) lineProblems.push({ line: r.line, column: 'tdMd', message: 'total depth must be above zero' });
-    if (tdMdM !== null && tdTvdM !== null && tdTvdM > tdMdM + 0.01) lineProblems.push({ line: r.line, column: 'tdTvd', message: 'TVD cannot exceed MD' });
+    if (tdMdM !== null && tdTvdM !== null && tdTvdM > tdMdM + 0.01)
+      lineProblems.push({ line: r.line, column: 'tdTvd', message: 'TVD cannot exceed MD' });
     if (isRejected || lineProblems.length || !lonLat) {
       problems.push(...lineProblems);
       invalid.push(r.line);
@@ -208,14 +224,22 @@ export function planSurveys(records: MappedRecord[], lookup: WellLookup): PlanRe
     for (let i = 1; i < group.items.length; i++) {
       const [prev, cur] = [group.items[i - 1], group.items[i]];
       if (cur.st.mdM < prev.st.mdM) {
-        problems.push({ line: cur.line, column: 'md', message: `MD ${cur.st.mdM} m is shallower than MD ${prev.st.mdM} m at line ${prev.line} for well "${group.wellName}": stations must increase in MD` });
+        problems.push({
+          line: cur.line,
+          column: 'md',
+          message: `MD ${cur.st.mdM} m is shallower than MD ${prev.st.mdM} m at line ${prev.line} for well "${group.wellName}": stations must increase in MD`,
+        });
         ok = false;
       }
     }
     group.items.sort((a, b) => a.st.mdM - b.st.mdM);
     for (let i = 1; i < group.items.length; i++) {
       if (group.items[i].st.mdM === group.items[i - 1].st.mdM) {
-        problems.push({ line: group.items[i].line, column: 'md', message: `a second station at MD ${group.items[i].st.mdM} m for well "${group.wellName}" (also line ${group.items[i - 1].line})` });
+        problems.push({
+          line: group.items[i].line,
+          column: 'md',
+          message: `a second station at MD ${group.items[i].st.mdM} m for well "${group.wellName}" (also line ${group.items[i - 1].line})`,
+        });
         ok = false;
       }
     }
@@ -230,7 +254,11 @@ export function planSurveys(records: MappedRecord[], lookup: WellLookup): PlanRe
 }
 
 /** TVD (given, or from the survey), and the value in Pa and as EMW. */
-export function planPressures(records: MappedRecord[], lookup: WellLookup, surveys: Map<string, StationInput[]>): PlanResult<PressurePlanRow[]> {
+export function planPressures(
+  records: MappedRecord[],
+  lookup: WellLookup,
+  surveys: Map<string, StationInput[]>,
+): PlanResult<PressurePlanRow[]> {
   const problems: Problem[] = [];
   const warnings: Problem[] = [];
   const invalid: number[] = [];
@@ -257,7 +285,8 @@ export function planPressures(records: MappedRecord[], lookup: WellLookup, surve
     const unit = r.valueUnit!;
     const lineProblems: Problem[] = [];
     if (mdM <= 0) lineProblems.push({ line: r.line, column: 'md', message: 'measured depth must be above zero' });
-    if (given !== null && given > mdM + 0.01) lineProblems.push({ line: r.line, column: 'tvd', message: `TVD ${given.toFixed(2)} m is deeper than MD ${mdM.toFixed(2)} m` });
+    if (given !== null && given > mdM + 0.01)
+      lineProblems.push({ line: r.line, column: 'tvd', message: `TVD ${given.toFixed(2)} m is deeper than MD ${mdM.toFixed(2)} m` });
     const value = v.value as number;
     if (value <= 0) lineProblems.push({ line: r.line, column: 'value', message: 'the value must be above zero' });
     if (lineProblems.length || !(tvdM > 0)) {

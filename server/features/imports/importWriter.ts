@@ -79,7 +79,9 @@ export async function writeWells(tx: Tx, teamId: string, userId: string, uploadI
     'wells',
     ['id', 'uuid'],
     [
-      ...WELL_COLUMNS.map(([name, type, expression]) => [name, type, KEEP_WHEN_BLANK.has(name) ? `COALESCE($value, t.${name})` : expression] as const),
+      ...WELL_COLUMNS.map(
+        ([name, type, expression]) => [name, type, KEEP_WHEN_BLANK.has(name) ? `COALESCE($value, t.${name})` : expression] as const,
+      ),
       ['version', 'int', 't.version + 1'],
       ['updated_at', 'timestamptz', 'now()'],
     ],
@@ -88,7 +90,10 @@ export async function writeWells(tx: Tx, teamId: string, userId: string, uploadI
   progress('updating wells', toUpdate.length, toUpdate.length);
   // A new TD on a surveyed well with no TD TVD gets one from the survey (new wells have no survey yet).
   // Its own WHERE keeps to wells with a TD (MD) and no TD TVD.
-  await fillTdTvdFromSurvey(tx, toUpdate.map((r) => r.existingId!));
+  await fillTdTvdFromSurvey(
+    tx,
+    toUpdate.map((r) => r.existingId!),
+  );
   return { created: toInsert.length, updated: toUpdate.length };
 }
 
@@ -102,7 +107,18 @@ export async function writeSurveys(tx: Tx, uploadId: string, plans: SurveyPlan[]
   await bulkInsert(
     tx,
     'survey_stations',
-    [['well_id', 'uuid'], ['seq', 'int'], ['md_m', 'float8'], ['inc_deg', 'float8'], ['azi_deg', 'float8'], ['tvd_m', 'float8'], ['north_m', 'float8'], ['east_m', 'float8'], ['dogleg_deg_per30m', 'float8'], ['upload_id', 'uuid']],
+    [
+      ['well_id', 'uuid'],
+      ['seq', 'int'],
+      ['md_m', 'float8'],
+      ['inc_deg', 'float8'],
+      ['azi_deg', 'float8'],
+      ['tvd_m', 'float8'],
+      ['north_m', 'float8'],
+      ['east_m', 'float8'],
+      ['dogleg_deg_per30m', 'float8'],
+      ['upload_id', 'uuid'],
+    ],
     rows,
     (done, total) => progress('writing survey stations', done, total),
   );
@@ -116,7 +132,13 @@ export async function writeSurveys(tx: Tx, uploadId: string, plans: SurveyPlan[]
     const updates = dependent.map((d) => [d.id, tvdFromSurvey(surveys.get(d.wellId), d.mdM)]);
     // The pressure stays as measured; its EMW follows the new TVD.
     const extra = table === pressureObservations ? ([['emw_kg_m_3', 'float8', `t.pressure_pa / (9.80665 * u.c1)`]] as const) : [];
-    await bulkUpdate(tx, table === pressureObservations ? 'pressure_observations' : 'formation_tops', ['id', 'uuid'], [['tvd_m', 'float8'], ...extra], updates.map((u) => (extra.length ? [...u, null] : u)));
+    await bulkUpdate(
+      tx,
+      table === pressureObservations ? 'pressure_observations' : 'formation_tops',
+      ['id', 'uuid'],
+      [['tvd_m', 'float8'], ...extra],
+      updates.map((u) => (extra.length ? [...u, null] : u)),
+    );
     retvd += updates.length;
   }
   await fillTdTvdFromSurvey(tx, wellIds);
@@ -128,11 +150,37 @@ export async function writePressures(tx: Tx, uploadId: string, rows: PressurePla
     tx,
     'pressure_observations',
     [
-      ['well_id', 'uuid'], ['kind', 'pressure_kind'], ['md_m', 'float8'], ['tvd_m', 'float8'], ['tvd_from_survey', 'boolean'],
-      ['value_entered', 'float8'], ['unit_entered', 'text'], ['pressure_pa', 'float8'], ['emw_kg_m_3', 'float8'],
-      ['quality', 'pressure_quality'], ['fluid', 'text'], ['observed_on', 'date'], ['source', 'text'], ['upload_id', 'uuid'],
+      ['well_id', 'uuid'],
+      ['kind', 'pressure_kind'],
+      ['md_m', 'float8'],
+      ['tvd_m', 'float8'],
+      ['tvd_from_survey', 'boolean'],
+      ['value_entered', 'float8'],
+      ['unit_entered', 'text'],
+      ['pressure_pa', 'float8'],
+      ['emw_kg_m_3', 'float8'],
+      ['quality', 'pressure_quality'],
+      ['fluid', 'text'],
+      ['observed_on', 'date'],
+      ['source', 'text'],
+      ['upload_id', 'uuid'],
     ],
-    rows.map((r) => [r.wellId, r.kind, r.mdM, r.tvdM, r.tvdFromSurvey, r.valueEntered, r.unitEntered, r.pressurePa, r.emwKgM3, r.quality, r.fluid, r.observedOn, r.source, uploadId]),
+    rows.map((r) => [
+      r.wellId,
+      r.kind,
+      r.mdM,
+      r.tvdM,
+      r.tvdFromSurvey,
+      r.valueEntered,
+      r.unitEntered,
+      r.pressurePa,
+      r.emwKgM3,
+      r.quality,
+      r.fluid,
+      r.observedOn,
+      r.source,
+      uploadId,
+    ]),
     (done, total) => progress('writing pressure observations', done, total),
   );
   return { created: rows.length };
@@ -142,7 +190,15 @@ export async function writeTops(tx: Tx, uploadId: string, rows: TopPlanRow[], pr
   await bulkInsert(
     tx,
     'formation_tops',
-    [['well_id', 'uuid'], ['name', 'text'], ['md_m', 'float8'], ['tvd_m', 'float8'], ['tvd_from_survey', 'boolean'], ['lithology', 'text'], ['upload_id', 'uuid']],
+    [
+      ['well_id', 'uuid'],
+      ['name', 'text'],
+      ['md_m', 'float8'],
+      ['tvd_m', 'float8'],
+      ['tvd_from_survey', 'boolean'],
+      ['lithology', 'text'],
+      ['upload_id', 'uuid'],
+    ],
     rows.map((r) => [r.wellId, r.name, r.mdM, r.tvdM, r.tvdFromSurvey, r.lithology, uploadId]),
     (done, total) => progress('writing formation tops', done, total),
   );
@@ -167,7 +223,15 @@ export async function removeRowsOfUploads(tx: Tx, uploadIds: string[]): Promise<
  * Each curve becomes one row with its MD index; NULL samples are stored as SQL NULL. A well the plan
  * creates is inserted first, in the same transaction, with this upload as its provenance.
  */
-export async function writeLasCurves(tx: Tx, teamId: string, userId: string, uploadId: string, las: LasFile, plan: LasPlan, progress: Progress) {
+export async function writeLasCurves(
+  tx: Tx,
+  teamId: string,
+  userId: string,
+  uploadId: string,
+  las: LasFile,
+  plan: LasPlan,
+  progress: Progress,
+) {
   let wellId = plan.well?.id;
   const nw = plan.createWell;
   if (!wellId && nw) {
@@ -202,7 +266,12 @@ export async function writeLasCurves(tx: Tx, teamId: string, userId: string, upl
     version: las.version,
     wrap: las.wrap,
     well: las.well.items,
-    curves: [las.index, ...las.curves].map((c) => ({ mnemonic: c.mnemonic, unit: 'rawUnit' in c ? c.rawUnit : c.unit, apiCode: c.apiCode, description: c.description })),
+    curves: [las.index, ...las.curves].map((c) => ({
+      mnemonic: c.mnemonic,
+      unit: 'rawUnit' in c ? c.rawUnit : c.unit,
+      apiCode: c.apiCode,
+      description: c.description,
+    })),
     parameters: las.parameters,
     other: las.other,
   };

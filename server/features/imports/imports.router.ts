@@ -26,7 +26,10 @@ const jsonField = (what: string) =>
       return z.NEVER;
     });
 
-const bool = z.enum(['true', 'false']).optional().transform((v) => v === 'true');
+const bool = z
+  .enum(['true', 'false'])
+  .optional()
+  .transform((v) => v === 'true');
 
 const importForm = z.object({
   kind: z.enum(IMPORT_KINDS, `must be one of ${IMPORT_KINDS.join(', ')}`),
@@ -40,14 +43,18 @@ const importForm = z.object({
   onDuplicate: z.enum(['update', 'skip']).optional(),
 });
 
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_FILE_BYTES, files: 1, fields: 20, fieldSize: 1024 * 1024 } });
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MAX_FILE_BYTES, files: 1, fields: 20, fieldSize: 1024 * 1024 },
+});
 
 /** multer's own errors become the API's error shape, naming the limit. */
 const receiveFile: RequestHandler = (req, res, next) => {
   upload.single('file')(req, res, (err: unknown) => {
     if (!err) return next();
     if (err instanceof multer.MulterError) {
-      if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'file_too_large', `The file is larger than the ${MAX_FILE_BYTES / 1024 / 1024} MB limit.`));
+      if (err.code === 'LIMIT_FILE_SIZE')
+        return next(new HttpError(413, 'file_too_large', `The file is larger than the ${MAX_FILE_BYTES / 1024 / 1024} MB limit.`));
       return next(badRequest('bad_upload', `The upload is not acceptable: ${err.message}${err.field ? ` (${err.field})` : ''}.`));
     }
     next(err);
@@ -60,7 +67,8 @@ export function importsRouter(db: Db, changes: TeamChanges): Router {
 
   r.post('/:teamId/imports', requireTeam('wells.import'), receiveFile, async (req, res) => {
     const form = parse(importForm, req.body ?? {});
-    if (!req.file) throw badRequest('validation_failed', 'Attach the file to import in the "file" field.', [{ path: 'file', message: 'is required' }]);
+    if (!req.file)
+      throw badRequest('validation_failed', 'Attach the file to import in the "file" field.', [{ path: 'file', message: 'is required' }]);
     const request = {
       teamId: teamIdOf(req),
       userId: req.session!.user.id,

@@ -44,7 +44,13 @@ interface Planned {
   invalidLines: number[];
   preview: Record<string, unknown>[];
   counts: Record<string, number>;
-  csv?: { delimiter: string; decimalComma: boolean; encoding: string; columns: { name: string; field: string | null; unit?: string }[]; units: FieldUnits };
+  csv?: {
+    delimiter: string;
+    decimalComma: boolean;
+    encoding: string;
+    columns: { name: string; field: string | null; unit?: string }[];
+    units: FieldUnits;
+  };
   las?: { plan: LasPlan; version: number | null; wrap: string };
   write: (tx: Parameters<Parameters<Db['transaction']>[0]>[0], uploadId: string, progress: Progress) => Promise<Record<string, unknown>>;
 }
@@ -70,9 +76,14 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
   const kind: CsvImportKind = req.kind;
   const csv = parseCsv(text);
   if (csv.rows.length > MAX_ROWS) {
-    throw new HttpError(413, 'too_many_rows', `${req.fileName} has ${csv.rows.length.toLocaleString('en')} rows; the limit is ${MAX_ROWS.toLocaleString('en')} per file — split it.`);
+    throw new HttpError(
+      413,
+      'too_many_rows',
+      `${req.fileName} has ${csv.rows.length.toLocaleString('en')} rows; the limit is ${MAX_ROWS.toLocaleString('en')} per file — split it.`,
+    );
   }
-  if (csv.header.length === 0 || (csv.rows.length === 0 && csv.problems.length === 0)) throw badRequest('empty_file', `${req.fileName} has no data rows under its header.`);
+  if (csv.header.length === 0 || (csv.rows.length === 0 && csv.problems.length === 0))
+    throw badRequest('empty_file', `${req.fileName} has no data rows under its header.`);
   const fields = IMPORT_FIELDS[kind];
   const matches = suggestColumnMatches(csv.header, fields);
   const mapping: ColumnMapping = req.mapping ?? Object.fromEntries(matches.map((m) => [m.column, m.field]));
@@ -92,13 +103,23 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
   // A unit for a field that has none would otherwise be dropped without a word.
   const numeric = fields.filter((f) => f.quantity).map((f) => f.key);
   for (const key of Object.keys(req.units ?? {})) {
-    if (!numeric.includes(key)) problems.push({ line: 1, column: key, message: `a unit was chosen for "${key}", which is not a numeric field of a ${kind} import (${numeric.join(', ')})` });
+    if (!numeric.includes(key))
+      problems.push({
+        line: 1,
+        column: key,
+        message: `a unit was chosen for "${key}", which is not a numeric field of a ${kind} import (${numeric.join(', ')})`,
+      });
   }
   // Ragged records never reach the mapping, but they are skipped lines all the same.
   const invalidLines = [...csv.raggedLines, ...mapped.rejected.map((r) => r.line)];
   // The planners speak of fields ('x', 'md'); the user knows the columns by the file's own header.
-  const inFileTerms = (list: Problem[]) => list.map((x) => (x.column && mapped.columnOfField[x.column] ? { ...x, column: mapped.columnOfField[x.column] } : x));
-  const columns = csv.header.map((name) => ({ name, field: mapping[name] ?? null, ...(matches.find((m) => m.column === name)?.unit ? { unit: matches.find((m) => m.column === name)!.unit } : {}) }));
+  const inFileTerms = (list: Problem[]) =>
+    list.map((x) => (x.column && mapped.columnOfField[x.column] ? { ...x, column: mapped.columnOfField[x.column] } : x));
+  const columns = csv.header.map((name) => ({
+    name,
+    field: mapping[name] ?? null,
+    ...(matches.find((m) => m.column === name)?.unit ? { unit: matches.find((m) => m.column === name)!.unit } : {}),
+  }));
   const base = {
     warnings: [] as Problem[],
     notes: [] as Problem[],
@@ -117,7 +138,11 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
       problems: [...problems, ...inFileTerms(p.problems)],
       invalidLines: [...invalidLines, ...p.invalidLines],
       preview: p.rows.slice(0, PREVIEW_ROWS).map((r) => ({ ...r, action: r.existingId ? 'update' : 'create' })),
-      counts: { valid: p.rows.length, create: p.rows.filter((r) => !r.existingId).length, update: p.rows.filter((r) => r.existingId).length },
+      counts: {
+        valid: p.rows.length,
+        create: p.rows.filter((r) => !r.existingId).length,
+        update: p.rows.filter((r) => r.existingId).length,
+      },
       write: (tx, uploadId, pr) => writeWells(tx, req.teamId, req.userId, uploadId, p.rows, pr),
     };
   }
@@ -160,8 +185,14 @@ async function plan(db: Db, req: ImportRequest, progress: Progress): Promise<Pla
 async function planLasFile(db: Db, req: ImportRequest, las: LasFile, lookup: WellLookup): Promise<Planned> {
   let chosen = null;
   if (req.wellId) {
-    const [w] = await db.select({ id: wells.id, name: wells.name, uwi: wells.uwi, tdMdM: wells.tdMdM }).from(wells).where(and(eq(wells.teamId, req.teamId), eq(wells.id, req.wellId)));
-    if (!w) throw badRequest('validation_failed', 'The chosen well is not in this team.', [{ path: 'wellId', message: 'is not a well of this team' }]);
+    const [w] = await db
+      .select({ id: wells.id, name: wells.name, uwi: wells.uwi, tdMdM: wells.tdMdM })
+      .from(wells)
+      .where(and(eq(wells.teamId, req.teamId), eq(wells.id, req.wellId)));
+    if (!w)
+      throw badRequest('validation_failed', 'The chosen well is not in this team.', [
+        { path: 'wellId', message: 'is not a well of this team' },
+      ]);
     chosen = w;
   }
   const roles = Object.fromEntries(Object.entries(req.mapping ?? {}).filter((e): e is [string, string] => typeof e[1] === 'string'));
@@ -178,7 +209,12 @@ async function planLasFile(db: Db, req: ImportRequest, las: LasFile, lookup: Wel
     // A LAS file imports whole or not at all: a broken file has no "valid rows" to keep.
     invalidLines: problems.map((x) => x.line),
     preview: p.curves.map((c) => ({ ...c })),
-    counts: { valid: problems.length ? 0 : p.curves.length, curves: p.curves.length, samples: las.index.values.length, createWell: p.createWell ? 1 : 0 },
+    counts: {
+      valid: problems.length ? 0 : p.curves.length,
+      curves: p.curves.length,
+      samples: las.index.values.length,
+      createWell: p.createWell ? 1 : 0,
+    },
     las: { plan: p, version: las.version, wrap: las.wrap },
     write: (tx, uploadId, pr) => writeLasCurves(tx, req.teamId, req.userId, uploadId, las, p, pr),
   };
@@ -218,7 +254,10 @@ export async function runImport(db: Db, req: ImportRequest, progress: Progress =
   const duplicateOf = duplicate && { uploadId: duplicate.uploadId, fileName: duplicate.fileName, createdAt: duplicate.createdAt };
   const invalidLines = [...new Set(planned.invalidLines)].sort((a, b) => a - b);
   // In the order a person reads the file (stable, so one line's problems keep their order).
-  planned.problems = planned.problems.map((p, i) => ({ p, i })).sort((a, b) => a.p.line - b.p.line || a.i - b.i).map(({ p }) => p);
+  planned.problems = planned.problems
+    .map((p, i) => ({ p, i }))
+    .sort((a, b) => a.p.line - b.p.line || a.i - b.i)
+    .map(({ p }) => p);
   const summary = {
     kind: req.kind,
     fileName: req.fileName,
@@ -238,10 +277,18 @@ export async function runImport(db: Db, req: ImportRequest, progress: Progress =
   // Skipping bad rows is no help when nothing valid remains, and a LAS file is one record.
   const fatal = req.kind === 'las' || (planned.counts.valid ?? 0) === 0;
   if (planned.problems.length && (!req.skipInvalid || fatal)) {
-    throw new HttpError(422, 'import_has_problems', `${req.fileName}: ${planned.problems.length} problem(s) found; nothing was imported.`, planned.problems);
+    throw new HttpError(
+      422,
+      'import_has_problems',
+      `${req.fileName}: ${planned.problems.length} problem(s) found; nothing was imported.`,
+      planned.problems,
+    );
   }
   if (duplicateOf && !req.onDuplicate) {
-    throw conflict(`${req.fileName} was imported before (as "${duplicateOf.fileName}" on ${duplicateOf.createdAt.slice(0, 10)}): choose to update from it again or skip.`, { duplicateOf });
+    throw conflict(
+      `${req.fileName} was imported before (as "${duplicateOf.fileName}" on ${duplicateOf.createdAt.slice(0, 10)}): choose to update from it again or skip.`,
+      { duplicateOf },
+    );
   }
   if (duplicateOf && req.onDuplicate === 'skip') return { dryRun: false, skipped: true, ...summary };
 
@@ -256,7 +303,12 @@ export async function runImport(db: Db, req: ImportRequest, progress: Progress =
         sha256: hash,
         content: req.bytes,
         outcome: {},
-        mapping: { mapping: req.mapping ?? planned.csv?.columns ?? null, units: planned.csv?.units ?? null, epsg: req.epsg, wellId: req.wellId ?? null },
+        mapping: {
+          mapping: req.mapping ?? planned.csv?.columns ?? null,
+          units: planned.csv?.units ?? null,
+          epsg: req.epsg,
+          wellId: req.wellId ?? null,
+        },
         uploadedBy: req.userId,
       })
       .returning({ id: uploads.id });

@@ -73,30 +73,60 @@ function newWellFrom(las: LasFile, uwi: string, epsg: number): { well: LasNewWel
   let at: { lon: number; lat: number; x: number; y: number; epsg: number; from: string } | null = null;
   if (loc.lat && loc.lon) {
     const message = checkLonLat(loc.lon.value, loc.lat.value);
-    if (message) problems.push({ line: (message.startsWith('latitude') ? loc.lat : loc.lon).line, column: (message.startsWith('latitude') ? loc.lat : loc.lon).mnemonic, message });
+    if (message)
+      problems.push({
+        line: (message.startsWith('latitude') ? loc.lat : loc.lon).line,
+        column: (message.startsWith('latitude') ? loc.lat : loc.lon).mnemonic,
+        message,
+      });
     else {
       // Other geodetic datums differ from WGS 84 by up to a few hundred metres: fine for screening, worth saying.
-      const datum = loc.geodeticDatum && !/WGS\s*-?\s*84/i.test(loc.geodeticDatum) ? `, read as WGS 84 although GDAT says "${loc.geodeticDatum}"` : '';
-      at = { lon: loc.lon.value, lat: loc.lat.value, x: loc.lon.value, y: loc.lat.value, epsg: 4326, from: `${loc.lat.mnemonic}/${loc.lon.mnemonic} (lines ${loc.lat.line}, ${loc.lon.line})${datum}` };
+      const datum =
+        loc.geodeticDatum && !/WGS\s*-?\s*84/i.test(loc.geodeticDatum) ? `, read as WGS 84 although GDAT says "${loc.geodeticDatum}"` : '';
+      at = {
+        lon: loc.lon.value,
+        lat: loc.lat.value,
+        x: loc.lon.value,
+        y: loc.lat.value,
+        epsg: 4326,
+        from: `${loc.lat.mnemonic}/${loc.lon.mnemonic} (lines ${loc.lat.line}, ${loc.lon.line})${datum}`,
+      };
     }
   } else if (loc.x && loc.y && !loc.lat && !loc.lon) {
     // The LAS header does not name the CRS of X/Y, so only the user's EPSG code can place them.
     if (epsg === 4326) {
-      problems.push({ line: loc.x.line, column: loc.x.mnemonic, message: `the file gives ${loc.x.mnemonic}/${loc.y.mnemonic} but no LATI/LONG: choose the EPSG code of ${loc.x.mnemonic}/${loc.y.mnemonic} to create well "${name}"` });
+      problems.push({
+        line: loc.x.line,
+        column: loc.x.mnemonic,
+        message: `the file gives ${loc.x.mnemonic}/${loc.y.mnemonic} but no LATI/LONG: choose the EPSG code of ${loc.x.mnemonic}/${loc.y.mnemonic} to create well "${name}"`,
+      });
     } else {
       try {
         const ll = toLonLat(loc.x.value, loc.y.value, epsg);
-        at = { ...ll, x: loc.x.value, y: loc.y.value, epsg, from: `${loc.x.mnemonic}/${loc.y.mnemonic} in EPSG:${epsg} (lines ${loc.x.line}, ${loc.y.line})` };
+        at = {
+          ...ll,
+          x: loc.x.value,
+          y: loc.y.value,
+          epsg,
+          from: `${loc.x.mnemonic}/${loc.y.mnemonic} in EPSG:${epsg} (lines ${loc.x.line}, ${loc.y.line})`,
+        };
       } catch (err) {
         problems.push({ line: loc.x.line, column: loc.x.mnemonic, message: (err as Error).message });
       }
     }
   }
   if (!at) {
-    if (problems.length) return { well: null, problems, missing: `the location in the file cannot create it (see line ${problems[0].line})` };
+    if (problems.length)
+      return { well: null, problems, missing: `the location in the file cannot create it (see line ${problems[0].line})` };
     const one = loc.lat ?? loc.lon ?? loc.x ?? loc.y;
     const other = loc.lat ? 'LONG' : loc.lon ? 'LATI' : loc.x ? 'Y' : 'X';
-    return { well: null, problems, missing: one ? `the file has ${one.mnemonic} but no ${other} to create it` : 'the file has no LATI/LONG (or X/Y) in ~W or ~P to create it' };
+    return {
+      well: null,
+      problems,
+      missing: one
+        ? `the file has ${one.mnemonic} but no ${other} to create it`
+        : 'the file has no LATI/LONG (or X/Y) in ~W or ~P to create it',
+    };
   }
   return {
     well: {
@@ -147,13 +177,23 @@ export function settleOffshore(well: LasNewWell, nearest: { name: string; offsho
 /** The plain note of what a well created from a LAS file lacks and what was assumed, for the preview. */
 export function newWellGapsNote(las: LasFile, well: LasNewWell): Problem {
   const lacks: string[] = [];
-  if (well.datumElevationM === null && well.waterDepthM === null) lacks.push('no rotary-table elevation or water depth in the file: the well is created with RT 0 m and no water depth');
-  else if (well.datumElevationM === null) lacks.push('no rotary-table elevation (EKB, EDF or EPD/APD) in the file: the well is created with RT 0 m');
+  if (well.datumElevationM === null && well.waterDepthM === null)
+    lacks.push('no rotary-table elevation or water depth in the file: the well is created with RT 0 m and no water depth');
+  else if (well.datumElevationM === null)
+    lacks.push('no rotary-table elevation (EKB, EDF or EPD/APD) in the file: the well is created with RT 0 m');
   else if (well.waterDepthM === null && well.offshore) lacks.push('no water depth in the file');
-  lacks.push(well.offshore ? `offshore ${well.offshoreFrom.startsWith('assumed') ? well.offshoreFrom : `from ${well.offshoreFrom}`}` : `onshore ${well.offshoreFrom.startsWith('assumed') ? well.offshoreFrom : `from ${well.offshoreFrom}`}`);
+  lacks.push(
+    well.offshore
+      ? `offshore ${well.offshoreFrom.startsWith('assumed') ? well.offshoreFrom : `from ${well.offshoreFrom}`}`
+      : `onshore ${well.offshoreFrom.startsWith('assumed') ? well.offshoreFrom : `from ${well.offshoreFrom}`}`,
+  );
   lacks.push(well.tdMdM === null ? 'no TD' : `TD ${well.tdMdM.toFixed(1)} m MD taken from the deepest depth of the file, no TD TVD`);
   lacks.push('no spud date; status "drilled"');
-  return { line: headerLine(las, 'WELL'), column: 'WELL', message: `the new well "${well.name}" has ${lacks.join('; ')} — edit its header before interpreting it` };
+  return {
+    line: headerLine(las, 'WELL'),
+    column: 'WELL',
+    message: `the new well "${well.name}" has ${lacks.join('; ')} — edit its header before interpreting it`,
+  };
 }
 
 /**
@@ -211,7 +251,15 @@ export function planLas(
     }
     let valid = 0;
     for (const v of c.values) if (!Number.isNaN(v)) valid++;
-    return { mnemonic: c.mnemonic, unit: c.unit, description: c.description, role, suggestedRole, samples: c.values.length, validSamples: valid };
+    return {
+      mnemonic: c.mnemonic,
+      unit: c.unit,
+      description: c.description,
+      role,
+      suggestedRole,
+      samples: c.values.length,
+      validSamples: valid,
+    };
   });
   if (curves.length === 0 && las.errors.length === 0) problems.push({ line: 1, message: 'the file has no curves besides the depth index' });
   const md = las.index.valuesM;

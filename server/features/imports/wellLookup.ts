@@ -26,7 +26,9 @@ export class WellLookup {
   }
 
   static async load(db: Db, teamId: string): Promise<WellLookup> {
-    return new WellLookup(await db.select({ id: wells.id, name: wells.name, uwi: wells.uwi, tdMdM: wells.tdMdM }).from(wells).where(eq(wells.teamId, teamId)));
+    return new WellLookup(
+      await db.select({ id: wells.id, name: wells.name, uwi: wells.uwi, tdMdM: wells.tdMdM }).from(wells).where(eq(wells.teamId, teamId)),
+    );
   }
 
   find(nameOrUwi: string): KnownWell | undefined {

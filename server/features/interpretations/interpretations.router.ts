@@ -20,13 +20,26 @@ export function interpretationsRouter(db: Db, changes: TeamChanges): Router {
     res.json(await currentInterpretation(db, teamIdOf(req), parse(wellParams, req.params).wellId));
   });
   r.post('/:teamId/wells/:wellId/interpretations', requireTeam('interpretations.edit'), async (req, res) => {
-    const saved = await saveInterpretation(db, teamIdOf(req), parse(wellParams, req.params).wellId, req.session!.user.id, parse(saveInterpretationBody, req.body));
+    const saved = await saveInterpretation(
+      db,
+      teamIdOf(req),
+      parse(wellParams, req.params).wellId,
+      req.session!.user.id,
+      parse(saveInterpretationBody, req.body),
+    );
     changes.bump(teamIdOf(req));
     res.status(201).json(saved);
   });
   r.post('/:teamId/wells/:wellId/interpretations/:version/restore', requireTeam('interpretations.edit'), async (req, res) => {
     const { wellId, version } = parse(versionParams, req.params);
-    const saved = await restoreInterpretation(db, teamIdOf(req), wellId, req.session!.user.id, version, parse(restoreBody, req.body).baseVersion);
+    const saved = await restoreInterpretation(
+      db,
+      teamIdOf(req),
+      wellId,
+      req.session!.user.id,
+      version,
+      parse(restoreBody, req.body).baseVersion,
+    );
     changes.bump(teamIdOf(req));
     res.status(201).json(saved);
   });

@@ -32,13 +32,21 @@ const toInterpretation = (r: Row): Interpretation => ({
 });
 
 async function assertWell(db: Db, teamId: string, wellId: string) {
-  const [w] = await db.select({ id: wells.id }).from(wells).where(and(eq(wells.teamId, teamId), eq(wells.id, wellId)));
+  const [w] = await db
+    .select({ id: wells.id })
+    .from(wells)
+    .where(and(eq(wells.teamId, teamId), eq(wells.id, wellId)));
   if (!w) throw notFound('That well');
 }
 
 export async function listInterpretations(db: Db, teamId: string, wellId: string): Promise<Interpretation[]> {
   await assertWell(db, teamId, wellId);
-  const rows = await db.select(columns).from(interpretations).leftJoin(users, eq(users.id, interpretations.createdBy)).where(eq(interpretations.wellId, wellId)).orderBy(desc(interpretations.version));
+  const rows = await db
+    .select(columns)
+    .from(interpretations)
+    .leftJoin(users, eq(users.id, interpretations.createdBy))
+    .where(eq(interpretations.wellId, wellId))
+    .orderBy(desc(interpretations.version));
   return rows.map(toInterpretation);
 }
 
@@ -57,7 +65,10 @@ export async function currentInterpretation(db: Db, teamId: string, wellId: stri
 }
 
 async function latestVersion(db: Db, wellId: string): Promise<number | null> {
-  const [r] = await db.select({ v: sql<number | null>`max(${interpretations.version})` }).from(interpretations).where(eq(interpretations.wellId, wellId));
+  const [r] = await db
+    .select({ v: sql<number | null>`max(${interpretations.version})` })
+    .from(interpretations)
+    .where(eq(interpretations.wellId, wellId));
   return r.v === null ? null : Number(r.v);
 }
 
@@ -70,7 +81,12 @@ export async function saveInterpretation(
   teamId: string,
   wellId: string,
   userId: string,
-  body: { baseVersion: number | null; status: 'draft' | 'accepted'; note?: string | null; restoredFrom?: number | null } & InterpretationContent,
+  body: {
+    baseVersion: number | null;
+    status: 'draft' | 'accepted';
+    note?: string | null;
+    restoredFrom?: number | null;
+  } & InterpretationContent,
 ): Promise<Interpretation> {
   await assertWell(db, teamId, wellId);
   const latest = await latestVersion(db, wellId);
@@ -79,7 +95,15 @@ export async function saveInterpretation(
   try {
     const [row] = await db
       .insert(interpretations)
-      .values({ wellId, version: (latest ?? 0) + 1, status, content: interpretationContentSchema.parse(content), note: note ?? null, restoredFrom: restoredFrom ?? null, createdBy: userId })
+      .values({
+        wellId,
+        version: (latest ?? 0) + 1,
+        status,
+        content: interpretationContentSchema.parse(content),
+        note: note ?? null,
+        restoredFrom: restoredFrom ?? null,
+        createdBy: userId,
+      })
       .returning({ version: interpretations.version });
     return (await listInterpretations(db, teamId, wellId)).find((i) => i.version === row.version)!;
   } catch (err) {
@@ -89,10 +113,23 @@ export async function saveInterpretation(
   }
 }
 
-export async function restoreInterpretation(db: Db, teamId: string, wellId: string, userId: string, version: number, baseVersion: number | null): Promise<Interpretation> {
+export async function restoreInterpretation(
+  db: Db,
+  teamId: string,
+  wellId: string,
+  userId: string,
+  version: number,
+  baseVersion: number | null,
+): Promise<Interpretation> {
   const all = await listInterpretations(db, teamId, wellId);
   const old = all.find((i) => i.version === version);
   if (!old) throw notFound(`Version ${version} of this interpretation`);
   const content = interpretationContentSchema.parse(old);
-  return saveInterpretation(db, teamId, wellId, userId, { ...content, baseVersion, status: 'accepted', note: `Restored version ${version}`, restoredFrom: version });
+  return saveInterpretation(db, teamId, wellId, userId, {
+    ...content,
+    baseVersion,
+    status: 'accepted',
+    note: `Restored version ${version}`,
+    restoredFrom: version,
+  });
 }

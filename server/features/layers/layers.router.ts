@@ -13,13 +13,17 @@ import { MAX_LAYER_BYTES } from './readLayerFile';
 const form = z.object({
   name: z.string().trim().min(1, 'is required').max(120),
   kind: z.enum(REFERENCE_LAYER_KINDS).default('other'),
-  color: z.string().regex(/^#[0-9a-fA-F]{6}$/, 'must be a colour like #3a7bd5').default('#6b7f99'),
+  color: z
+    .string()
+    .regex(/^#[0-9a-fA-F]{6}$/, 'must be a colour like #3a7bd5')
+    .default('#6b7f99'),
 });
 
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_LAYER_BYTES, files: 1 } });
 const receive: RequestHandler = (req, res, next) =>
   upload.single('file')(req, res, (err: unknown) => {
-    if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'file_too_large', `The layer file is larger than the ${MAX_LAYER_BYTES / 1024 / 1024} MB limit.`));
+    if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE')
+      return next(new HttpError(413, 'file_too_large', `The layer file is larger than the ${MAX_LAYER_BYTES / 1024 / 1024} MB limit.`));
     next(err);
   });
 
@@ -30,8 +34,15 @@ export function layersRouter(db: Db, changes: TeamChanges): Router {
   });
   r.post('/:teamId/layers', requireTeam('layers.upload'), receive, async (req, res) => {
     const body = parse(form, req.body ?? {});
-    if (!req.file) throw badRequest('validation_failed', 'Attach the layer file in the "file" field.', [{ path: 'file', message: 'is required' }]);
-    const layer = await createLayer(db, { teamId: teamIdOf(req), userId: req.session!.user.id, ...body, fileName: req.file.originalname, bytes: req.file.buffer });
+    if (!req.file)
+      throw badRequest('validation_failed', 'Attach the layer file in the "file" field.', [{ path: 'file', message: 'is required' }]);
+    const layer = await createLayer(db, {
+      teamId: teamIdOf(req),
+      userId: req.session!.user.id,
+      ...body,
+      fileName: req.file.originalname,
+      bytes: req.file.buffer,
+    });
     changes.bump(teamIdOf(req));
     res.status(201).json(layer);
   });

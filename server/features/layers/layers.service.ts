@@ -23,12 +23,23 @@ export async function createLayer(db: Db, layer: NewLayer): Promise<ReferenceLay
   const id = await db.transaction(async (tx) => {
     const [row] = await tx
       .insert(referenceLayers)
-      .values({ teamId: layer.teamId, name: layer.name, kind: layer.kind, color: layer.color, fileName: layer.fileName, createdBy: layer.userId })
+      .values({
+        teamId: layer.teamId,
+        name: layer.name,
+        kind: layer.kind,
+        color: layer.color,
+        fileName: layer.fileName,
+        createdBy: layer.userId,
+      })
       .returning({ id: referenceLayers.id });
     await bulkInsert(
       tx,
       'reference_features',
-      [['layer_id', 'uuid'], ['geom', 'text', 'ST_Force2D(ST_SetSRID(ST_GeomFromGeoJSON($value), 4326))'], ['properties', 'jsonb']],
+      [
+        ['layer_id', 'uuid'],
+        ['geom', 'text', 'ST_Force2D(ST_SetSRID(ST_GeomFromGeoJSON($value), 4326))'],
+        ['properties', 'jsonb'],
+      ],
       features.map((f) => [row.id, JSON.stringify(f.geometry), JSON.stringify(f.properties)]),
     );
     const bad = await tx.execute<{ n: number; reason: string }>(sql`
@@ -52,7 +63,19 @@ const summary = sql`
     (SELECT ST_Extent(f.geom)::geometry FROM reference_features f WHERE f.layer_id = l.id) AS extent
   FROM reference_layers l`;
 
-type SummaryRow = { id: string; name: string; kind: ReferenceLayer['kind']; color: string; created_at: Date; feature_count: number; types: string[] | null; xmin: number | null; ymin: number | null; xmax: number | null; ymax: number | null };
+type SummaryRow = {
+  id: string;
+  name: string;
+  kind: ReferenceLayer['kind'];
+  color: string;
+  created_at: Date;
+  feature_count: number;
+  types: string[] | null;
+  xmin: number | null;
+  ymin: number | null;
+  xmax: number | null;
+  ymax: number | null;
+};
 
 function toLayer(r: SummaryRow): ReferenceLayer {
   return {
@@ -68,7 +91,9 @@ function toLayer(r: SummaryRow): ReferenceLayer {
 }
 
 async function query(db: Db, where: ReturnType<typeof sql>) {
-  const r = await db.execute<SummaryRow>(sql`SELECT s.*, ST_XMin(extent) AS xmin, ST_YMin(extent) AS ymin, ST_XMax(extent) AS xmax, ST_YMax(extent) AS ymax FROM (${summary} WHERE ${where}) s ORDER BY s.name`);
+  const r = await db.execute<SummaryRow>(
+    sql`SELECT s.*, ST_XMin(extent) AS xmin, ST_YMin(extent) AS ymin, ST_XMax(extent) AS xmax, ST_YMax(extent) AS ymax FROM (${summary} WHERE ${where}) s ORDER BY s.name`,
+  );
   return r.rows.map(toLayer);
 }
 
@@ -81,6 +106,9 @@ export async function getLayer(db: Db, teamId: string, id: string): Promise<Refe
 }
 
 export async function deleteLayer(db: Db, teamId: string, id: string): Promise<void> {
-  const gone = await db.delete(referenceLayers).where(and(eq(referenceLayers.teamId, teamId), eq(referenceLayers.id, id))).returning({ id: referenceLayers.id });
+  const gone = await db
+    .delete(referenceLayers)
+    .where(and(eq(referenceLayers.teamId, teamId), eq(referenceLayers.id, id)))
+    .returning({ id: referenceLayers.id });
   if (!gone.length) throw notFound('That layer');
 }

@@ -19,7 +19,11 @@ const geometry: z.ZodType<{ type: string; coordinates?: unknown; geometries?: un
     z.object({ type: z.literal('GeometryCollection'), geometries: z.array(geometry) }),
   ]),
 );
-const feature = z.object({ type: z.literal('Feature'), geometry: geometry.nullable(), properties: z.record(z.string(), z.unknown()).nullable().optional() });
+const feature = z.object({
+  type: z.literal('Feature'),
+  geometry: geometry.nullable(),
+  properties: z.record(z.string(), z.unknown()).nullable().optional(),
+});
 const featureCollection = z.object({ type: z.literal('FeatureCollection'), features: z.array(z.unknown()) });
 
 export interface LayerFeature {
@@ -51,21 +55,36 @@ export function readLayerFile(fileName: string, bytes: Buffer): LayerFeature[] {
     }
   }
   const fc = featureCollection.safeParse(data);
-  if (!fc.success) throw badRequest('invalid_layer', `${fileName} is not a GeoJSON FeatureCollection (RFC 7946): it needs "type": "FeatureCollection" and a "features" array.`);
+  if (!fc.success)
+    throw badRequest(
+      'invalid_layer',
+      `${fileName} is not a GeoJSON FeatureCollection (RFC 7946): it needs "type": "FeatureCollection" and a "features" array.`,
+    );
   if (fc.data.features.length > MAX_LAYER_FEATURES) {
-    throw badRequest('layer_too_large', `${fileName} has ${fc.data.features.length.toLocaleString('en')} features; the limit is ${MAX_LAYER_FEATURES.toLocaleString('en')}.`);
+    throw badRequest(
+      'layer_too_large',
+      `${fileName} has ${fc.data.features.length.toLocaleString('en')} features; the limit is ${MAX_LAYER_FEATURES.toLocaleString('en')}.`,
+    );
   }
   const out: LayerFeature[] = [];
   fc.data.features.forEach((raw, i) => {
     const f = feature.safeParse(raw);
     if (!f.success) {
       const issue = f.error.issues[0];
-      throw badRequest('invalid_layer', `Feature ${i + 1} is not valid GeoJSON: ${issue.path.join('.') || 'feature'} ${issue.message}.`, { feature: i + 1 });
+      throw badRequest('invalid_layer', `Feature ${i + 1} is not valid GeoJSON: ${issue.path.join('.') || 'feature'} ${issue.message}.`, {
+        feature: i + 1,
+      });
     }
     if (!f.data.geometry) return;
-    for (const [lon, lat] of positions(f.data.geometry.coordinates ?? (f.data.geometry.geometries ?? []).map((g) => (g as { coordinates: unknown }).coordinates))) {
+    for (const [lon, lat] of positions(
+      f.data.geometry.coordinates ?? (f.data.geometry.geometries ?? []).map((g) => (g as { coordinates: unknown }).coordinates),
+    )) {
       if (!(lon >= -180 && lon <= 180 && lat >= -90 && lat <= 90)) {
-        throw badRequest('invalid_layer', `Feature ${i + 1} has a position (${lon}, ${lat}) outside longitude −180..180 / latitude −90..90; GeoJSON is WGS 84 lon/lat.`, { feature: i + 1 });
+        throw badRequest(
+          'invalid_layer',
+          `Feature ${i + 1} has a position (${lon}, ${lat}) outside longitude −180..180 / latitude −90..90; GeoJSON is WGS 84 lon/lat.`,
+          { feature: i + 1 },
+        );
       }
     }
     out.push({ geometry: f.data.geometry, properties: f.data.properties ?? {} });

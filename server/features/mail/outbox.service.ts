@@ -8,7 +8,14 @@ import type { Db } from '../../db/client';
  * them reset and take over any member's account.
  */
 export async function listTeamOutbox(db: Db, teamId: string, limit = 200): Promise<OutboxMessage[]> {
-  const result = await db.execute<{ id: string; from_address: string; to_addresses: string[]; subject: string; text_body: string; received_at: Date }>(sql`
+  const result = await db.execute<{
+    id: string;
+    from_address: string;
+    to_addresses: string[];
+    subject: string;
+    text_body: string;
+    received_at: Date;
+  }>(sql`
     SELECT m.id, m.from_address, m.to_addresses, m.subject, m.text_body, m.received_at
     FROM mail_messages m
     WHERE m.team_id = ${teamId}

@@ -10,7 +10,15 @@ import { getPlannedWell } from './plannedWells.service';
  * Rank score, 0 to 1, with the weights of OFFSET_SCORE_WEIGHTS (common practice, no source): nearness matters most,
  * then a similar water depth, then whether the offset reached the planned depth, then how much pressure data it holds.
  */
-export function offsetScore(c: { distanceKm: number; radiusKm: number; waterDepthDiffM: number | null; tdCoverage: number | null; pressureCount: number; hasLot: boolean; logCount: number }): number {
+export function offsetScore(c: {
+  distanceKm: number;
+  radiusKm: number;
+  waterDepthDiffM: number | null;
+  tdCoverage: number | null;
+  pressureCount: number;
+  hasLot: boolean;
+  logCount: number;
+}): number {
   const near = 1 - Math.min(1, c.distanceKm / Math.max(c.radiusKm, 1e-9));
   const water = c.waterDepthDiffM === null ? 0.5 : Math.exp(-Math.abs(c.waterDepthDiffM) / 200);
   const depth = c.tdCoverage === null ? 0 : Math.min(1, c.tdCoverage);
@@ -22,7 +30,12 @@ export function offsetScore(c: { distanceKm: number; radiusKm: number; waterDept
  * Offset wells around a planned well, on the geography type so distances are metres on the spheroid:
  * within `radiusKm`, or within the planned well's prospect outline plus `prospectBufferKm`.
  */
-export async function offsetCandidates(db: Db, teamId: string, plannedWellId: string, opts: { radiusKm: number; prospectBufferKm?: number }): Promise<OffsetCandidate[]> {
+export async function offsetCandidates(
+  db: Db,
+  teamId: string,
+  plannedWellId: string,
+  opts: { radiusKm: number; prospectBufferKm?: number },
+): Promise<OffsetCandidate[]> {
   const planned = await getPlannedWell(db, teamId, plannedWellId);
   const [lon, lat] = planned.location.coordinates;
   const here = sql`ST_SetSRID(ST_MakePoint(${lon}, ${lat}), 4326)`;
@@ -37,7 +50,9 @@ export async function offsetCandidates(db: Db, teamId: string, plannedWellId: st
     if (!planned.prospectId) throw badRequest('no_prospect', 'This planned well belongs to no prospect; search by radius instead.');
     area = sql`ST_DWithin(w.location::geography, (SELECT outline FROM prospects WHERE id = ${planned.prospectId} AND team_id = ${teamId})::geography, ${opts.prospectBufferKm * 1000})`;
     // The ranking's "near" scale: the farthest outline vertex from the planned well, plus the buffer.
-    const r = await db.execute<{ km: number }>(sql`SELECT (SELECT max(ST_Distance(${here}::geography, (dp).geom::geography)) FROM ST_DumpPoints(outline) dp) / 1000 AS km FROM prospects WHERE id = ${planned.prospectId}`);
+    const r = await db.execute<{ km: number }>(
+      sql`SELECT (SELECT max(ST_Distance(${here}::geography, (dp).geom::geography)) FROM ST_DumpPoints(outline) dp) / 1000 AS km FROM prospects WHERE id = ${planned.prospectId}`,
+    );
     radiusKm = Number(r.rows[0]?.km ?? 0) + opts.prospectBufferKm;
   }
   const rows = await candidateRows(db, teamId, here, area, plannedWellId);
@@ -68,20 +83,49 @@ export async function prospectOffsetWells(db: Db, teamId: string, prospectId: st
       const tdTvdssM = r.td_tvd_m === null ? null : r.td_tvd_m - r.datum_elevation_m;
       const tdCoverage = tdTvdssM === null || prospect.targetBaseM === null ? null : tdTvdssM / prospect.targetBaseM;
       // "Near" is measured across the buffer: a well inside the outline scores full marks.
-      return toCandidate(r, { distanceKm: Number(r.distance_m) / 1000, waterDepthDiffM: null, tdCoverage, radiusKm: Math.max(bufferKm, 1e-3) });
+      return toCandidate(r, {
+        distanceKm: Number(r.distance_m) / 1000,
+        waterDepthDiffM: null,
+        tdCoverage,
+        radiusKm: Math.max(bufferKm, 1e-3),
+      });
     })
     .sort(byScore);
 }
 
 type CandidateRow = {
-  id: string; name: string; uwi: string | null; status: string; lon: number; lat: number; distance_m: number; azimuth_rad: number | null;
-  water_depth_m: number | null; datum_elevation_m: number; td_tvd_m: number | null; td_md_m: number | null; pressures: number; logs: number;
-  has_lot: boolean; has_survey: boolean; in_set: boolean; top_tvdss_m: number | null;
+  id: string;
+  name: string;
+  uwi: string | null;
+  status: string;
+  lon: number;
+  lat: number;
+  distance_m: number;
+  azimuth_rad: number | null;
+  water_depth_m: number | null;
+  datum_elevation_m: number;
+  td_tvd_m: number | null;
+  td_md_m: number | null;
+  pressures: number;
+  logs: number;
+  has_lot: boolean;
+  has_survey: boolean;
+  in_set: boolean;
+  top_tvdss_m: number | null;
 };
 
 /** The facts the ranking reads for every team well in `area`, nearest first; distance from `here` unless given. */
-async function candidateRows(db: Db, teamId: string, here: SQL, area: SQL, plannedWellId: string | null, distance?: SQL): Promise<CandidateRow[]> {
-  const inSet = plannedWellId ? sql`EXISTS (SELECT 1 FROM offset_picks o WHERE o.planned_well_id = ${plannedWellId} AND o.well_id = w.id)` : sql`false`;
+async function candidateRows(
+  db: Db,
+  teamId: string,
+  here: SQL,
+  area: SQL,
+  plannedWellId: string | null,
+  distance?: SQL,
+): Promise<CandidateRow[]> {
+  const inSet = plannedWellId
+    ? sql`EXISTS (SELECT 1 FROM offset_picks o WHERE o.planned_well_id = ${plannedWellId} AND o.well_id = w.id)`
+    : sql`false`;
   const rows = await db.execute<CandidateRow>(sql`
     SELECT w.id, w.name, w.uwi, w.status::text, ST_X(w.location) AS lon, ST_Y(w.location) AS lat,
       ${distance ?? sql`ST_Distance(w.location::geography, ${here}::geography)`} AS distance_m,
@@ -101,7 +145,10 @@ async function candidateRows(db: Db, teamId: string, here: SQL, area: SQL, plann
   return rows.rows;
 }
 
-function toCandidate(r: CandidateRow, m: { distanceKm: number; waterDepthDiffM: number | null; tdCoverage: number | null; radiusKm: number }): OffsetCandidate {
+function toCandidate(
+  r: CandidateRow,
+  m: { distanceKm: number; waterDepthDiffM: number | null; tdCoverage: number | null; radiusKm: number },
+): OffsetCandidate {
   const c = {
     wellId: r.id,
     name: r.name,
@@ -131,7 +178,14 @@ const byScore = (a: OffsetCandidate, b: OffsetCandidate) => b.score - a.score ||
 export async function getOffsetSet(db: Db, teamId: string, plannedWellId: string): Promise<OffsetSetEntry[]> {
   await getPlannedWell(db, teamId, plannedWellId);
   const rows = await db
-    .select({ wellId: offsetPicks.wellId, name: wells.name, reason: offsetPicks.reason, addedBy: offsetPicks.addedBy, addedByName: users.name, addedAt: offsetPicks.addedAt })
+    .select({
+      wellId: offsetPicks.wellId,
+      name: wells.name,
+      reason: offsetPicks.reason,
+      addedBy: offsetPicks.addedBy,
+      addedByName: users.name,
+      addedAt: offsetPicks.addedAt,
+    })
     .from(offsetPicks)
     .innerJoin(wells, eq(wells.id, offsetPicks.wellId))
     .leftJoin(users, eq(users.id, offsetPicks.addedBy))
@@ -141,18 +195,41 @@ export async function getOffsetSet(db: Db, teamId: string, plannedWellId: string
 }
 
 /** Replaces the offset set; wells kept from before keep their original who/when. */
-export async function putOffsetSet(db: Db, teamId: string, userId: string, plannedWellId: string, body: OffsetSetBody): Promise<OffsetSetEntry[]> {
+export async function putOffsetSet(
+  db: Db,
+  teamId: string,
+  userId: string,
+  plannedWellId: string,
+  body: OffsetSetBody,
+): Promise<OffsetSetEntry[]> {
   await getPlannedWell(db, teamId, plannedWellId);
   const ids = [...new Set(body.wells.map((w) => w.wellId))];
   if (ids.length) {
-    const found = await db.select({ id: wells.id }).from(wells).where(and(eq(wells.teamId, teamId), inArray(wells.id, ids)));
+    const found = await db
+      .select({ id: wells.id })
+      .from(wells)
+      .where(and(eq(wells.teamId, teamId), inArray(wells.id, ids)));
     const missing = ids.filter((id) => !found.some((f) => f.id === id));
     if (missing.length) {
-      throw badRequest('validation_failed', `${missing.length} of the wells are not wells of this team.`, missing.map((id) => ({ path: 'wells', message: `${id} is not a well of this team` })));
+      throw badRequest(
+        'validation_failed',
+        `${missing.length} of the wells are not wells of this team.`,
+        missing.map((id) => ({ path: 'wells', message: `${id} is not a well of this team` })),
+      );
     }
   }
   await db.transaction(async (tx) => {
-    await tx.delete(offsetPicks).where(and(eq(offsetPicks.plannedWellId, plannedWellId), ids.length ? sql`${offsetPicks.wellId} NOT IN (${sql.join(ids.map((i) => sql`${i}::uuid`), sql`, `)})` : sql`true`));
+    await tx.delete(offsetPicks).where(
+      and(
+        eq(offsetPicks.plannedWellId, plannedWellId),
+        ids.length
+          ? sql`${offsetPicks.wellId} NOT IN (${sql.join(
+              ids.map((i) => sql`${i}::uuid`),
+              sql`, `,
+            )})`
+          : sql`true`,
+      ),
+    );
     for (const w of body.wells) {
       await tx
         .insert(offsetPicks)

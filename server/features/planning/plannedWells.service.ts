@@ -47,8 +47,14 @@ export async function estimateWaterDepth(db: Db, teamId: string, lon: number, la
 
 async function assertProspect(db: Db, teamId: string, prospectId: string | null | undefined) {
   if (!prospectId) return;
-  const [p] = await db.select({ id: prospects.id }).from(prospects).where(and(eq(prospects.teamId, teamId), eq(prospects.id, prospectId)));
-  if (!p) throw badRequest('validation_failed', 'That prospect is not in this team.', [{ path: 'prospectId', message: 'is not a prospect of this team' }]);
+  const [p] = await db
+    .select({ id: prospects.id })
+    .from(prospects)
+    .where(and(eq(prospects.teamId, teamId), eq(prospects.id, prospectId)));
+  if (!p)
+    throw badRequest('validation_failed', 'That prospect is not in this team.', [
+      { path: 'prospectId', message: 'is not a prospect of this team' },
+    ]);
 }
 
 async function values(db: Db, teamId: string, body: PlannedWellBody) {
@@ -73,7 +79,10 @@ export async function listPlannedWells(db: Db, teamId: string): Promise<PlannedW
 }
 
 export async function getPlannedWell(db: Db, teamId: string, id: string): Promise<PlannedWell> {
-  const [row] = await db.select(columns).from(plannedWells).where(and(eq(plannedWells.teamId, teamId), eq(plannedWells.id, id)));
+  const [row] = await db
+    .select(columns)
+    .from(plannedWells)
+    .where(and(eq(plannedWells.teamId, teamId), eq(plannedWells.id, id)));
   if (!row) throw notFound('That planned well');
   return toPlanned(row);
 }
@@ -86,7 +95,13 @@ export async function createPlannedWell(db: Db, teamId: string, userId: string, 
   return getPlannedWell(db, teamId, row.id);
 }
 
-export async function updatePlannedWell(db: Db, teamId: string, userId: string, id: string, body: PlannedWellBody & { version: number }): Promise<PlannedWell> {
+export async function updatePlannedWell(
+  db: Db,
+  teamId: string,
+  userId: string,
+  id: string,
+  body: PlannedWellBody & { version: number },
+): Promise<PlannedWell> {
   const updated = await db
     .update(plannedWells)
     .set({ ...(await values(db, teamId, body)), updatedBy: userId, updatedAt: sql`now()`, version: sql`${plannedWells.version} + 1` })
@@ -94,12 +109,17 @@ export async function updatePlannedWell(db: Db, teamId: string, userId: string, 
     .returning({ id: plannedWells.id });
   if (!updated.length) {
     const current = await getPlannedWell(db, teamId, id);
-    throw conflict('This planned well was changed by someone else since you opened it; reload to see their changes.', { currentVersion: current.version });
+    throw conflict('This planned well was changed by someone else since you opened it; reload to see their changes.', {
+      currentVersion: current.version,
+    });
   }
   return getPlannedWell(db, teamId, id);
 }
 
 export async function deletePlannedWell(db: Db, teamId: string, id: string): Promise<void> {
-  const gone = await db.delete(plannedWells).where(and(eq(plannedWells.teamId, teamId), eq(plannedWells.id, id))).returning({ id: plannedWells.id });
+  const gone = await db
+    .delete(plannedWells)
+    .where(and(eq(plannedWells.teamId, teamId), eq(plannedWells.id, id)))
+    .returning({ id: plannedWells.id });
   if (!gone.length) throw notFound('That planned well');
 }

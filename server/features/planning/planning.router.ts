@@ -1,6 +1,14 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { offsetCandidatesQuery, offsetSetBody, prospectOffsetQuery, plannedWellBody, plannedWellPatchBody, prospectBody, prospectPatchBody } from '../../../shared/schemas/planning';
+import {
+  offsetCandidatesQuery,
+  offsetSetBody,
+  prospectOffsetQuery,
+  plannedWellBody,
+  plannedWellPatchBody,
+  prospectBody,
+  prospectPatchBody,
+} from '../../../shared/schemas/planning';
 import type { Db } from '../../db/client';
 import { parse } from '../../lib/parse';
 import type { TeamChanges } from '../../lib/teamChanges';

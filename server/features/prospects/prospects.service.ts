@@ -32,7 +32,10 @@ export async function listProspects(db: Db, teamId: string): Promise<Prospect[]>
 }
 
 export async function getProspect(db: Db, teamId: string, id: string): Promise<Prospect> {
-  const [row] = await db.select(columns).from(prospects).where(and(eq(prospects.teamId, teamId), eq(prospects.id, id)));
+  const [row] = await db
+    .select(columns)
+    .from(prospects)
+    .where(and(eq(prospects.teamId, teamId), eq(prospects.id, id)));
   if (!row) throw notFound('That prospect');
   return toProspect(row);
 }
@@ -55,7 +58,13 @@ export async function createProspect(db: Db, teamId: string, userId: string, bod
   return getProspect(db, teamId, row.id);
 }
 
-export async function updateProspect(db: Db, teamId: string, userId: string, id: string, body: ProspectBody & { version: number }): Promise<Prospect> {
+export async function updateProspect(
+  db: Db,
+  teamId: string,
+  userId: string,
+  id: string,
+  body: ProspectBody & { version: number },
+): Promise<Prospect> {
   await checkPolygon(db, body.geometry);
   const updated = await db
     .update(prospects)
@@ -73,12 +82,17 @@ export async function updateProspect(db: Db, teamId: string, userId: string, id:
     .returning({ id: prospects.id });
   if (!updated.length) {
     const current = await getProspect(db, teamId, id);
-    throw conflict('This prospect was changed by someone else since you opened it; reload to see their changes.', { currentVersion: current.version });
+    throw conflict('This prospect was changed by someone else since you opened it; reload to see their changes.', {
+      currentVersion: current.version,
+    });
   }
   return getProspect(db, teamId, id);
 }
 
 export async function deleteProspect(db: Db, teamId: string, id: string): Promise<void> {
-  const gone = await db.delete(prospects).where(and(eq(prospects.teamId, teamId), eq(prospects.id, id))).returning({ id: prospects.id });
+  const gone = await db
+    .delete(prospects)
+    .where(and(eq(prospects.teamId, teamId), eq(prospects.id, id)))
+    .returning({ id: prospects.id });
   if (!gone.length) throw notFound('That prospect');
 }

@@ -1,5 +1,14 @@
 import { sql } from 'drizzle-orm';
-import { alignLogs, buildProfile, poreIntervalTvdM, pressureAtDepth, profileWellFromHeader, type LogCurveInput, type ProfileLogRole, type ProfileWell } from '../../../shared/profile';
+import {
+  alignLogs,
+  buildProfile,
+  poreIntervalTvdM,
+  pressureAtDepth,
+  profileWellFromHeader,
+  type LogCurveInput,
+  type ProfileLogRole,
+  type ProfileWell,
+} from '../../../shared/profile';
 import type { InterpretationContent } from '../../../shared/schemas/interpretations';
 import type { SurfaceExcludedWell, SurfaceQuantity } from '../../../shared/schemas/surfaces';
 import type { StationInput } from '../../../shared/trajectory';
@@ -30,7 +39,9 @@ const BATCH = 20;
  * A well's datums for the profile builder from its row, by the rule the profile page uses (`profileWellFromHeader`).
  * @example profileWellOf({ datum_elevation_m: 310, water_depth_m: null, air_gap_m: null, ground_elevation_m: 302, offshore: false, … }) // airGapM 8
  */
-export function profileWellOf(w: Pick<WellRow, 'datum_elevation_m' | 'water_depth_m' | 'air_gap_m' | 'ground_elevation_m' | 'offshore'>): ProfileWell {
+export function profileWellOf(
+  w: Pick<WellRow, 'datum_elevation_m' | 'water_depth_m' | 'air_gap_m' | 'ground_elevation_m' | 'offshore'>,
+): ProfileWell {
   const num = (v: number | string | null) => (v === null ? null : Number(v));
   return profileWellFromHeader({
     datumElevationM: Number(w.datum_elevation_m),
@@ -60,9 +71,12 @@ async function loadLogs(db: Db, ids: string[]) {
   const byWell = new Map<string, { curves: LogCurveInput[]; stations: StationInput[] }>(ids.map((i) => [i, { curves: [], stations: [] }]));
   for (const c of curves) {
     if (!ROLES.includes(c.role)) continue;
-    byWell.get(c.well_id)!.curves.push({ role: c.role, unit: c.unit, mdM: c.md_m.map(Number), values: c.values.map((v) => (v === null ? null : Number(v))) });
+    byWell
+      .get(c.well_id)!
+      .curves.push({ role: c.role, unit: c.unit, mdM: c.md_m.map(Number), values: c.values.map((v) => (v === null ? null : Number(v))) });
   }
-  for (const s of stations) byWell.get(s.well_id)!.stations.push({ mdM: Number(s.md_m), incDeg: Number(s.inc_deg), aziDeg: Number(s.azi_deg) });
+  for (const s of stations)
+    byWell.get(s.well_id)!.stations.push({ mdM: Number(s.md_m), incDeg: Number(s.inc_deg), aziDeg: Number(s.azi_deg) });
   return byWell;
 }
 
@@ -114,12 +128,21 @@ export async function valuesAtDepth(db: Db, rows: WellRow[], quantity: SurfaceQu
             top: content.top ? { marginKgM3: content.top.marginKgM3, minThicknessM: content.top.minThicknessM } : undefined,
           });
           const interval = poreIntervalTvdM(profile);
-          if (interval && (!reach || interval[1] - well.datumElevationM > reach.baseTvdssM)) reach = { name: r.name, baseTvdssM: interval[1] - well.datumElevationM };
+          if (interval && (!reach || interval[1] - well.datumElevationM > reach.baseTvdssM))
+            reach = { name: r.name, baseTvdssM: interval[1] - well.datumElevationM };
           const at = pressureAtDepth(profile, tvdM);
           if (!at.ok) leaveOut(at.reason);
           else {
             const value = quantity === 'emw_at_depth' ? at.value.poreEmwKgM3 : at.value.overpressurePa;
-            points.push({ wellId: r.id, name: r.name, lon: Number(r.lon), lat: Number(r.lat), value, interpretationVersion: r.version, atDepth: at.value });
+            points.push({
+              wellId: r.id,
+              name: r.name,
+              lon: Number(r.lon),
+              lat: Number(r.lat),
+              value,
+              interpretationVersion: r.version,
+              atDepth: at.value,
+            });
           }
         }
       } catch (err) {

@@ -14,7 +14,14 @@ import {
   type PlanarTrend,
   type Variogram,
 } from '../../../shared/interpolation';
-import { MAX_SURFACE_CELLS, contourIntervalOf, krigingNeighbours, surfaceRequestBody, surfaceSiUnit, type Surface } from '../../../shared/schemas/surfaces';
+import {
+  MAX_SURFACE_CELLS,
+  contourIntervalOf,
+  krigingNeighbours,
+  surfaceRequestBody,
+  surfaceSiUnit,
+  type Surface,
+} from '../../../shared/schemas/surfaces';
 import type { z } from 'zod';
 
 export type SurfaceParams = z.output<typeof surfaceRequestBody>;
@@ -103,7 +110,8 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
     }
     merged.push({ ...p, x, y, members: [p.name] });
   }
-  for (const m of merged) if (m.members.length > 1) warnings.push(`Wells ${m.members.join(', ')} share a location; their values were averaged.`);
+  for (const m of merged)
+    if (m.members.length > 1) warnings.push(`Wells ${m.members.join(', ')} share a location; their values were averaged.`);
   if (merged.length < 3) {
     throw new SurfaceInputError(`A surface needs at least 3 wells with a value at different locations; found ${merged.length}.`);
   }
@@ -135,7 +143,9 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
   let krigData = data;
   progress('interpolating', 0, targets.length);
   if (flat) {
-    warnings.push(`All ${data.length} wells have the same value (${values[0] * scale}): the surface is flat and its kriging variance is zero.`);
+    warnings.push(
+      `All ${data.length} wells have the same value (${values[0] * scale}): the surface is flat and its kriging variance is zero.`,
+    );
     estimates = targets.map(() => ({ value: values[0] * scale, variance: params.method.kind === 'kriging' ? 0 : null }));
   } else if (params.method.kind === 'kriging') {
     // Regression kriging when asked: a least-squares plane takes out the regional trend, the residuals are kriged,
@@ -147,19 +157,22 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
       krigData = data.map((d) => ({ ...d, value: d.value - plane.evaluate(d.x, d.y) }));
       const perKm = Math.hypot(plane.b, plane.c) * 1000 * scale;
       const towards = ((Math.atan2(plane.b, plane.c) * 180) / Math.PI + 360) % 360;
-      warnings.push(`A planar regional trend was removed before kriging (rising ${Number(perKm.toPrecision(3))} ${surfaceSiUnit(params.quantity)} per km toward ${Math.round(towards)}°); the variogram is of the residuals.`);
+      warnings.push(
+        `A planar regional trend was removed before kriging (rising ${Number(perKm.toPrecision(3))} ${surfaceSiUnit(params.quantity)} per km toward ${Math.round(towards)}°); the variogram is of the residuals.`,
+      );
     }
     let maxD = 0;
-    for (let i = 0; i < data.length; i++) for (let j = i + 1; j < data.length; j++) maxD = Math.max(maxD, Math.hypot(data[i].x - data[j].x, data[i].y - data[j].y));
+    for (let i = 0; i < data.length; i++)
+      for (let j = i + 1; j < data.length; j++) maxD = Math.max(maxD, Math.hypot(data[i].x - data[j].x, data[i].y - data[j].y));
     // Lags up to half the largest well separation: past it few pairs span the area and the estimates are erratic
     // (common practice, no source). fitVariogram bounds the practical range by the largest lag it is given.
     experimental = experimentalVariogram(krigData, { lags: EXPERIMENTAL_LAGS, lagWidth: maxD / 2 / EXPERIMENTAL_LAGS });
     if (params.method.variogram) {
       const v = params.method.variogram;
       variogram = { ...v, nugget: v.nugget / scale ** 2, sill: v.sill / scale ** 2 };
-    }
-    else {
-      if (experimental.length < 3) throw new SurfaceInputError('Too few well pairs to fit a variogram: give one by hand, or use inverse-distance weighting.');
+    } else {
+      if (experimental.length < 3)
+        throw new SurfaceInputError('Too few well pairs to fit a variogram: give one by hand, or use inverse-distance weighting.');
       variogram = fitVariogram(experimental, { model: params.method.model });
       fitted = true;
     }
@@ -169,23 +182,46 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
     const t = trend;
     estimates = inChunks(
       targets,
-      (chunk) => ordinaryKriging(krigData, v, chunk, { maxNeighbours }).map((e, k) => ({ value: (e.value + (t ? t.evaluate(chunk[k].x, chunk[k].y) : 0)) * scale, variance: e.variance * scale ** 2 })),
+      (chunk) =>
+        ordinaryKriging(krigData, v, chunk, { maxNeighbours }).map((e, k) => ({
+          value: (e.value + (t ? t.evaluate(chunk[k].x, chunk[k].y) : 0)) * scale,
+          variance: e.variance * scale ** 2,
+        })),
       progress,
     );
   } else {
     const power = params.method.power;
-    estimates = inChunks(targets, (chunk) => idw(data, chunk, { power }).map((value) => ({ value: value * scale, variance: null as number | null })), progress);
+    estimates = inChunks(
+      targets,
+      (chunk) => idw(data, chunk, { power }).map((value) => ({ value: value * scale, variance: null as number | null })),
+      progress,
+    );
   }
   progress('cross-validating', targets.length, targets.length);
 
   const method =
     params.method.kind === 'kriging' && variogram
-      ? { kind: 'kriging' as const, variogram, maxNeighbours: looNeighbours(params.method.kind === 'kriging' ? params.method.maxNeighbours : null, data.length) }
+      ? {
+          kind: 'kriging' as const,
+          variogram,
+          maxNeighbours: looNeighbours(params.method.kind === 'kriging' ? params.method.maxNeighbours : null, data.length),
+        }
       : { kind: 'idw' as const, power: params.method.kind === 'idw' ? params.method.power : 2 };
-  const looRaw = flat ? { rmse: 0, meanError: 0, residuals: data.map((d, index) => ({ index, observed: d.value, predicted: d.value, residual: 0 })) } : leaveOneOut(krigData, method);
+  const looRaw = flat
+    ? { rmse: 0, meanError: 0, residuals: data.map((d, index) => ({ index, observed: d.value, predicted: d.value, residual: 0 })) }
+    : leaveOneOut(krigData, method);
   // With a trend removed the residuals were cross-validated (the plane fitted on all wells); the plane goes back on.
   const plane = trend;
-  const loo = plane ? { ...looRaw, residuals: looRaw.residuals.map((r) => ({ ...r, observed: data[r.index].value, predicted: r.predicted + plane.evaluate(data[r.index].x, data[r.index].y) })) } : looRaw;
+  const loo = plane
+    ? {
+        ...looRaw,
+        residuals: looRaw.residuals.map((r) => ({
+          ...r,
+          observed: data[r.index].value,
+          predicted: r.predicted + plane.evaluate(data[r.index].x, data[r.index].y),
+        })),
+      }
+    : looRaw;
 
   const cellValues: (number | null)[] = new Array(g.nx * g.ny).fill(null);
   const cellStd: (number | null)[] | null = params.method.kind === 'kriging' ? new Array(g.nx * g.ny).fill(null) : null;
@@ -207,7 +243,9 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
   let interval = contourIntervalOf(params);
   if ((max - min) / interval > MAX_CONTOUR_LEVELS) {
     const wider = (max - min) / MAX_CONTOUR_LEVELS;
-    warnings.push(`A contour interval of ${interval} ${unit} would draw ${Math.floor((max - min) / interval)} levels; it was widened to ${wider.toPrecision(3)} ${unit}.`);
+    warnings.push(
+      `A contour interval of ${interval} ${unit} would draw ${Math.floor((max - min) / interval)} levels; it was widened to ${wider.toPrecision(3)} ${unit}.`,
+    );
     interval = wider;
   }
   const thresholds: number[] = [];

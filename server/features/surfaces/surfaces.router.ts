@@ -13,7 +13,9 @@ import { valueAt } from './valueAt';
 
 const prospectParams = z.object({ id: z.string().uuid('must be a prospect id') });
 const surfaceParams = z.object({ surfaceId: z.string().uuid('must be a surface id') });
-const pointQuery = z.object({ lon: z.coerce.number(), lat: z.coerce.number() }).refine((p) => lonLatSchema.safeParse([p.lon, p.lat]).success, 'lon must be within −180..180 and lat within −90..90');
+const pointQuery = z
+  .object({ lon: z.coerce.number(), lat: z.coerce.number() })
+  .refine((p) => lonLatSchema.safeParse([p.lon, p.lat]).success, 'lon must be within −180..180 and lat within −90..90');
 const asyncQuery = z.object({ async: z.enum(['true', 'false']).optional() });
 
 export function surfacesRouter(db: Db): Router {
@@ -23,7 +25,8 @@ export function surfacesRouter(db: Db): Router {
   r.post('/:teamId/prospects/:id/surfaces', requireTeam('surfaces.run'), async (req, res) => {
     const { id } = parse(prospectParams, req.params);
     const params = parse(surfaceRequestBody, req.body ?? {});
-    const run = (progress?: Parameters<typeof createSurface>[5]) => createSurface(db, teamIdOf(req), req.session!.user.id, id, params, progress);
+    const run = (progress?: Parameters<typeof createSurface>[5]) =>
+      createSurface(db, teamIdOf(req), req.session!.user.id, id, params, progress);
     if (parse(asyncQuery, req.query).async === 'true') {
       res.status(202).json({ jobId: jobs.start(teamIdOf(req), run).id });
       return;

@@ -1,7 +1,16 @@
 import { FT_M } from '../../../shared/units';
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { z } from 'zod';
-import { AT_DEPTH_QUANTITIES, SURFACE_QUANTITY_LABELS, surfaceRequestBody, surfaceSiUnit, type Surface, type SurfaceExcludedWell, type SurfaceQuantity, type SurfaceSummary } from '../../../shared/schemas/surfaces';
+import {
+  AT_DEPTH_QUANTITIES,
+  SURFACE_QUANTITY_LABELS,
+  surfaceRequestBody,
+  surfaceSiUnit,
+  type Surface,
+  type SurfaceExcludedWell,
+  type SurfaceQuantity,
+  type SurfaceSummary,
+} from '../../../shared/schemas/surfaces';
 import type { Db } from '../../db/client';
 import { surfaces, users } from '../../db/schema';
 import { badRequest, notFound } from '../../lib/httpError';
@@ -25,23 +34,48 @@ const withTop = (where: ReturnType<typeof sql>) => sql`
   WHERE ${where}
   ORDER BY w.name`;
 
-const listNames = (wells: { name: string }[]) => `${wells.slice(0, 10).map((w) => w.name).join(', ')}${wells.length > 10 ? ', …' : ''}`;
+const listNames = (wells: { name: string }[]) =>
+  `${wells
+    .slice(0, 10)
+    .map((w) => w.name)
+    .join(', ')}${wells.length > 10 ? ', …' : ''}`;
 
 async function candidates(db: Db, teamId: string, prospectId: string, params: Params): Promise<Candidate[]> {
   const src = params.wells;
   if (src.from === 'prospect') {
-    const rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND ST_DWithin(w.location::geography, (SELECT outline FROM prospects WHERE id = ${prospectId})::geography, ${src.bufferKm * 1000})`))).rows;
-    if (rows.length === 0) throw badRequest('no_wells', `No wells lie within ${src.bufferKm} km of this prospect; widen the buffer or list the wells.`);
+    const rows = (
+      await db.execute<Candidate>(
+        withTop(
+          sql`w.team_id = ${teamId} AND ST_DWithin(w.location::geography, (SELECT outline FROM prospects WHERE id = ${prospectId})::geography, ${src.bufferKm * 1000})`,
+        ),
+      )
+    ).rows;
+    if (rows.length === 0)
+      throw badRequest('no_wells', `No wells lie within ${src.bufferKm} km of this prospect; widen the buffer or list the wells.`);
     return rows;
   }
   if (src.from === 'offset-set') {
     await getPlannedWell(db, teamId, src.plannedWellId);
-    const rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND w.id IN (SELECT well_id FROM offset_picks WHERE planned_well_id = ${src.plannedWellId})`))).rows;
+    const rows = (
+      await db.execute<Candidate>(
+        withTop(sql`w.team_id = ${teamId} AND w.id IN (SELECT well_id FROM offset_picks WHERE planned_well_id = ${src.plannedWellId})`),
+      )
+    ).rows;
     if (rows.length === 0) throw badRequest('no_wells', 'That planned well has no offset wells picked yet.');
     return rows;
   }
-  const rows = (await db.execute<Candidate>(withTop(sql`w.team_id = ${teamId} AND w.id IN (${sql.join(src.wellIds.map((i) => sql`${i}::uuid`), sql`, `)})`))).rows;
-  if (rows.length < src.wellIds.length) throw badRequest('validation_failed', `${src.wellIds.length - rows.length} of the listed wells are not wells of this team.`);
+  const rows = (
+    await db.execute<Candidate>(
+      withTop(
+        sql`w.team_id = ${teamId} AND w.id IN (${sql.join(
+          src.wellIds.map((i) => sql`${i}::uuid`),
+          sql`, `,
+        )})`,
+      ),
+    )
+  ).rows;
+  if (rows.length < src.wellIds.length)
+    throw badRequest('validation_failed', `${src.wellIds.length - rows.length} of the listed wells are not wells of this team.`);
   return rows;
 }
 
@@ -74,7 +108,11 @@ function topPoints(rows: Candidate[], params: Params) {
   if (noTop.length) warnings.push(`${noTop.length} well(s) have no accepted TOP pick and were left out: ${listNames(noTop)}.`);
   if (noWater.length) warnings.push(`${noWater.length} offshore well(s) have no water depth and were left out: ${listNames(noWater)}.`);
   if (points.length < 3) {
-    throw badRequest('too_few_wells', `A surface needs at least 3 wells with an accepted TOP pick; ${points.length} of the ${rows.length} wells found have one.`, { warnings, excluded });
+    throw badRequest(
+      'too_few_wells',
+      `A surface needs at least 3 wells with an accepted TOP pick; ${points.length} of the ${rows.length} wells found have one.`,
+      { warnings, excluded },
+    );
   }
   return { points, excluded, warnings };
 }
@@ -89,9 +127,17 @@ async function atDepthPoints(db: Db, rows: Candidate[], params: Params, progress
       { excluded },
     );
   }
-  const warnings = excluded.length ? [`${excluded.length} of the ${rows.length} wells have no pore pressure at ${depthText(depth, params.depthUnit)} TVDSS and were left out (see the list of wells left out).`] : [];
+  const warnings = excluded.length
+    ? [
+        `${excluded.length} of the ${rows.length} wells have no pore pressure at ${depthText(depth, params.depthUnit)} TVDSS and were left out (see the list of wells left out).`,
+      ]
+    : [];
   if (points.length < 3) {
-    throw badRequest('too_few_wells', `A surface needs at least 3 wells with a pore pressure at ${depthText(depth, params.depthUnit)} TVDSS; ${points.length} of the ${rows.length} wells found have one.`, { warnings, excluded });
+    throw badRequest(
+      'too_few_wells',
+      `A surface needs at least 3 wells with a pore pressure at ${depthText(depth, params.depthUnit)} TVDSS; ${points.length} of the ${rows.length} wells found have one.`,
+      { warnings, excluded },
+    );
   }
   return { points, excluded, warnings };
 }
@@ -106,15 +152,30 @@ export function depthText(depthM: number, unit: 'm' | 'ft' = 'm', digits = 1): s
 }
 
 /** Gathers the wells, computes off the main thread, and stores the run. */
-export async function createSurface(db: Db, teamId: string, userId: string, prospectId: string, params: Params, progress: Progress = () => {}): Promise<Surface> {
+export async function createSurface(
+  db: Db,
+  teamId: string,
+  userId: string,
+  prospectId: string,
+  params: Params,
+  progress: Progress = () => {},
+): Promise<Surface> {
   const prospect = await getProspect(db, teamId, prospectId);
   progress('gathering wells', 0, 1);
   const rows = await candidates(db, teamId, prospectId, params);
-  const { points, excluded, warnings } = AT_DEPTH_QUANTITIES.includes(params.quantity) ? await atDepthPoints(db, rows, params, progress) : topPoints(rows, params);
+  const { points, excluded, warnings } = AT_DEPTH_QUANTITIES.includes(params.quantity)
+    ? await atDepthPoints(db, rows, params, progress)
+    : topPoints(rows, params);
   const result = await runSurfaceInWorker({ points, outline: prospect.geometry, params }, progress);
   progress('saving', 0, 1);
-  const method = params.method.kind === 'kriging' ? `ordinary kriging (${result.variogram?.model.model})` : `inverse distance (power ${params.method.power})`;
-  const at = params.depthTvdssM !== undefined && AT_DEPTH_QUANTITIES.includes(params.quantity) ? ` at ${depthText(params.depthTvdssM, params.depthUnit)} TVDSS` : '';
+  const method =
+    params.method.kind === 'kriging'
+      ? `ordinary kriging (${result.variogram?.model.model})`
+      : `inverse distance (power ${params.method.power})`;
+  const at =
+    params.depthTvdssM !== undefined && AT_DEPTH_QUANTITIES.includes(params.quantity)
+      ? ` at ${depthText(params.depthTvdssM, params.depthUnit)} TVDSS`
+      : '';
   // "EMW at a depth" + " at 3,000 m TVDSS" would say "at" twice: the depth replaces the words.
   const label = at ? SURFACE_QUANTITY_LABELS[params.quantity].replace(/ at a depth$/, '') : SURFACE_QUANTITY_LABELS[params.quantity];
   const name = params.name ?? `${label}${at} — ${method}`;
@@ -137,7 +198,14 @@ export async function createSurface(db: Db, teamId: string, userId: string, pros
       values: grid.values as number[],
       stdDev: grid.stdDev as number[] | null,
       extent: sql`ST_SetSRID(ST_GeomFromGeoJSON(${JSON.stringify(result.extent)}), 4326)` as unknown as string,
-      result: { ...rest, excluded, warnings: [...warnings, ...rest.warnings], cornersLonLat: grid.cornersLonLat, min: grid.min, max: grid.max },
+      result: {
+        ...rest,
+        excluded,
+        warnings: [...warnings, ...rest.warnings],
+        cornersLonLat: grid.cornersLonLat,
+        min: grid.min,
+        max: grid.max,
+      },
       rmseM: result.crossValidation.rmse,
       wellCount: result.wells.length,
       createdBy: userId,
@@ -202,13 +270,28 @@ function summaryOf(r: SummaryRow): SurfaceSummary {
 
 export async function listSurfaces(db: Db, teamId: string, prospectId: string): Promise<SurfaceSummary[]> {
   await getProspect(db, teamId, prospectId);
-  const rows = await db.select(summaryColumns).from(surfaces).leftJoin(users, eq(users.id, surfaces.createdBy)).where(and(eq(surfaces.teamId, teamId), eq(surfaces.prospectId, prospectId))).orderBy(desc(surfaces.createdAt));
+  const rows = await db
+    .select(summaryColumns)
+    .from(surfaces)
+    .leftJoin(users, eq(users.id, surfaces.createdBy))
+    .where(and(eq(surfaces.teamId, teamId), eq(surfaces.prospectId, prospectId)))
+    .orderBy(desc(surfaces.createdAt));
   return rows.map(summaryOf);
 }
 
 export async function getSurface(db: Db, teamId: string, id: string): Promise<Surface> {
   const [row] = await db
-    .select({ ...summaryColumns, nx: surfaces.nx, ny: surfaces.ny, projection: surfaces.projection, x0: surfaces.x0, y0: surfaces.y0, values: surfaces.values, stdDev: surfaces.stdDev, result: surfaces.result })
+    .select({
+      ...summaryColumns,
+      nx: surfaces.nx,
+      ny: surfaces.ny,
+      projection: surfaces.projection,
+      x0: surfaces.x0,
+      y0: surfaces.y0,
+      values: surfaces.values,
+      stdDev: surfaces.stdDev,
+      result: surfaces.result,
+    })
     .from(surfaces)
     .leftJoin(users, eq(users.id, surfaces.createdBy))
     .where(and(eq(surfaces.teamId, teamId), eq(surfaces.id, id)));
@@ -217,7 +300,19 @@ export async function getSurface(db: Db, teamId: string, id: string): Promise<Su
   return {
     ...summaryOf(row),
     params: row.params,
-    grid: { nx: row.nx, ny: row.ny, cellSizeM: row.cellSizeM, projection: row.projection, x0: row.x0, y0: row.y0, values: row.values, stdDev: row.stdDev, cornersLonLat: r.cornersLonLat, min: r.min, max: r.max },
+    grid: {
+      nx: row.nx,
+      ny: row.ny,
+      cellSizeM: row.cellSizeM,
+      projection: row.projection,
+      x0: row.x0,
+      y0: row.y0,
+      values: row.values,
+      stdDev: row.stdDev,
+      cornersLonLat: r.cornersLonLat,
+      min: r.min,
+      max: r.max,
+    },
     contours: r.contours,
     extent: r.extent,
     variogram: r.variogram,
@@ -229,6 +324,9 @@ export async function getSurface(db: Db, teamId: string, id: string): Promise<Su
 }
 
 export async function deleteSurface(db: Db, teamId: string, id: string): Promise<void> {
-  const gone = await db.delete(surfaces).where(and(eq(surfaces.teamId, teamId), eq(surfaces.id, id))).returning({ id: surfaces.id });
+  const gone = await db
+    .delete(surfaces)
+    .where(and(eq(surfaces.teamId, teamId), eq(surfaces.id, id)))
+    .returning({ id: surfaces.id });
   if (!gone.length) throw notFound('That surface');
 }

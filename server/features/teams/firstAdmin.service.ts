@@ -20,7 +20,10 @@ export type FirstAdminInput = z.infer<typeof firstAdminInput>;
  * An existing account is made admin of the team but its password is left alone (null comes back).
  * @example const { password } = await createFirstAdmin(db, { email: 'ops@example.org', name: 'Ops', team: 'North Shelf' });
  */
-export async function createFirstAdmin(db: Db, input: FirstAdminInput): Promise<{ teamId: string; userId: string; password: string | null }> {
+export async function createFirstAdmin(
+  db: Db,
+  input: FirstAdminInput,
+): Promise<{ teamId: string; userId: string; password: string | null }> {
   return db.transaction(async (tx) => {
     await tx.insert(teams).values({ name: input.team }).onConflictDoNothing();
     const [team] = await tx.select({ id: teams.id }).from(teams).where(eq(teams.name, input.team));

@@ -7,7 +7,15 @@ import { parse } from '../../lib/parse';
 import { requireTeam, teamIdOf } from '../../middleware/guards';
 import type { Mailer } from '../mail/mailer';
 import { listTeamOutbox } from '../mail/outbox.service';
-import { changeRole, inviteMember, listMembers, listPendingInvitations, removeMember, resendInvitation, revokeInvitation } from './teams.service';
+import {
+  changeRole,
+  inviteMember,
+  listMembers,
+  listPendingInvitations,
+  removeMember,
+  resendInvitation,
+  revokeInvitation,
+} from './teams.service';
 
 const invitationParams = z.object({ teamId: z.string().uuid(), invitationId: z.string().uuid('must be an invitation id') });
 const memberParams = z.object({ teamId: z.string().uuid(), userId: z.string().uuid('must be a user id') });

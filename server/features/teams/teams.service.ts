@@ -46,7 +46,11 @@ async function mailInvitation(
       text: `Hello ${inv.name},\n\n${inviter?.name ?? 'A team admin'} invited you to join "${team.name}" on Porelith as ${ROLE_LABELS[inv.role]}.\n${what}\n\n${link}\n`,
     });
   } catch (err) {
-    throw new HttpError(502, 'mail_failed', `The invitation to ${inv.email} could not be e-mailed (${(err as Error).message}); nothing was saved. Check the mail settings and try again.`);
+    throw new HttpError(
+      502,
+      'mail_failed',
+      `The invitation to ${inv.email} could not be e-mailed (${(err as Error).message}); nothing was saved. Check the mail settings and try again.`,
+    );
   }
 }
 
@@ -74,7 +78,14 @@ export async function inviteMember(
       .insert(invitations)
       .values({ teamId, email: body.email, name: body.name, role: body.role, tokenHash: hash, invitedBy, expiresAt })
       .returning({ id: invitations.id });
-    await mailInvitation(db, mailer, appUrl, { teamId, invitedBy, email: body.email, name: body.name, role: body.role }, token, Boolean(existing));
+    await mailInvitation(
+      db,
+      mailer,
+      appUrl,
+      { teamId, invitedBy, email: body.email, name: body.name, role: body.role },
+      token,
+      Boolean(existing),
+    );
     return row;
   });
   return { id: inv.id, email: body.email, role: body.role, expiresAt: expiresAt.toISOString() };
@@ -103,7 +114,10 @@ export async function changeRole(db: Db, teamId: string, userId: string, role: R
   if (before === 'admin' && role !== 'admin' && (await adminCount(db, teamId)) <= 1) {
     throw conflict('This is the team’s last admin; make someone else admin first.');
   }
-  await db.update(memberships).set({ role }).where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
+  await db
+    .update(memberships)
+    .set({ role })
+    .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
   const member = (await listMembers(db, teamId)).find((m) => m.userId === userId);
   if (!member) throw notFound('That member');
   return member;
@@ -173,7 +187,14 @@ export async function resendInvitation(
       .returning();
     if (!inv) throw noPendingInvitation();
     const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, inv.email));
-    await mailInvitation(db, mailer, appUrl, { teamId, invitedBy: sentBy, email: inv.email, name: inv.name, role: inv.role }, token, Boolean(existing));
+    await mailInvitation(
+      db,
+      mailer,
+      appUrl,
+      { teamId, invitedBy: sentBy, email: inv.email, name: inv.name, role: inv.role },
+      token,
+      Boolean(existing),
+    );
   });
   const row = (await listPendingInvitations(db, teamId)).find((i) => i.id === invitationId);
   if (!row) throw noPendingInvitation();

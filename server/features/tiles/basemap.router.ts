@@ -14,19 +14,21 @@ const TILE_CACHE = 'public, max-age=86400';
 /** Style and TileJSON carry the request's origin, so a cache must ask again rather than reuse another host's. */
 const ORIGIN_BOUND_CACHE = 'no-cache';
 
-const whole = (name: string) => z.string().regex(/^\d{1,8}$/, `${name} must be a whole number`).transform(Number);
-const tileParams = z
-  .object({ z: whole('z'), x: whole('x'), y: whole('y') })
-  .superRefine((t, ctx) => {
-    if (t.z > MAX_REQUEST_ZOOM) {
-      ctx.addIssue({ code: 'custom', path: ['z'], message: `z must be between 0 and ${MAX_REQUEST_ZOOM}` });
-      return;
-    }
-    const last = 2 ** t.z - 1;
-    for (const axis of ['x', 'y'] as const) {
-      if (t[axis] > last) ctx.addIssue({ code: 'custom', path: [axis], message: `${axis} must be between 0 and ${last} at zoom ${t.z}` });
-    }
-  });
+const whole = (name: string) =>
+  z
+    .string()
+    .regex(/^\d{1,8}$/, `${name} must be a whole number`)
+    .transform(Number);
+const tileParams = z.object({ z: whole('z'), x: whole('x'), y: whole('y') }).superRefine((t, ctx) => {
+  if (t.z > MAX_REQUEST_ZOOM) {
+    ctx.addIssue({ code: 'custom', path: ['z'], message: `z must be between 0 and ${MAX_REQUEST_ZOOM}` });
+    return;
+  }
+  const last = 2 ** t.z - 1;
+  for (const axis of ['x', 'y'] as const) {
+    if (t[axis] > last) ctx.addIssue({ code: 'custom', path: [axis], message: `${axis} must be between 0 and ${last} at zoom ${t.z}` });
+  }
+});
 const styleQuery = z.object({ theme: z.enum(['light', 'dark']).default('light') });
 const fontFiles = new Set<string>(Object.values(BASEMAP_FONTS).map((f) => f.file));
 

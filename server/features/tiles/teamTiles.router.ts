@@ -28,9 +28,11 @@ export function teamTilesRouter(db: Db, changes: TeamChanges, { cache: useCache 
   r.get('/:teamId/tiles/:layer/:z/:x/:y.mvt', requireTeam('team.read'), async (req, res) => {
     const p = params.safeParse(req.params);
     const layer = p.success ? layerOf(p.data.layer) : null;
-    if (!p.success || !layer) throw badRequest('bad_tile', `Not a tile address: ${req.params.layer}/${req.params.z}/${req.params.x}/${req.params.y}.`);
+    if (!p.success || !layer)
+      throw badRequest('bad_tile', `Not a tile address: ${req.params.layer}/${req.params.z}/${req.params.x}/${req.params.y}.`);
     const { z: zoom, x, y } = p.data;
-    if (x >= 2 ** zoom || y >= 2 ** zoom) throw badRequest('bad_tile', `Tile ${zoom}/${x}/${y} does not exist: x and y must be below ${2 ** zoom} at zoom ${zoom}.`);
+    if (x >= 2 ** zoom || y >= 2 ** zoom)
+      throw badRequest('bad_tile', `Tile ${zoom}/${x}/${y} does not exist: x and y must be below ${2 ** zoom} at zoom ${zoom}.`);
     const teamId = teamIdOf(req);
     const generation = changes.generation(teamId);
     const key = `${teamId}:${generation}:${p.data.layer}:${zoom}/${x}/${y}`;

@@ -21,7 +21,10 @@ export async function fillTdTvdFromSurvey(db: Db | Tx, wellIds: string[]): Promi
     .from(wells)
     .where(and(inArray(wells.id, wellIds), isNull(wells.tdTvdM), isNotNull(wells.tdMdM)));
   if (targets.length === 0) return 0;
-  const surveys = await loadSurveys(db, targets.map((t) => t.id));
+  const surveys = await loadSurveys(
+    db,
+    targets.map((t) => t.id),
+  );
   const updates = targets.flatMap((t) => {
     const stations = surveys.get(t.id);
     return stations?.length && t.tdMdM !== null ? [[t.id, tvdAt(stations, t.tdMdM)] as const] : [];

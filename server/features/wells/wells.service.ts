@@ -53,8 +53,17 @@ function toSummary(r: SummaryRow): WellSummary {
 
 export async function listWells(db: Db, teamId: string, q: ListQuery): Promise<WellList> {
   const where: SQL[] = [eq(wells.teamId, teamId)];
-  if (q.q) where.push(sql`(${wells.name} ILIKE ${'%' + q.q + '%'} OR ${wells.uwi} ILIKE ${'%' + q.q + '%'} OR ${wells.operator} ILIKE ${'%' + q.q + '%'})`);
-  if (q.status?.length) where.push(sql`${wells.status} IN (${sql.join(q.status.map((s) => sql`${s}`), sql`, `)})`);
+  if (q.q)
+    where.push(
+      sql`(${wells.name} ILIKE ${'%' + q.q + '%'} OR ${wells.uwi} ILIKE ${'%' + q.q + '%'} OR ${wells.operator} ILIKE ${'%' + q.q + '%'})`,
+    );
+  if (q.status?.length)
+    where.push(
+      sql`${wells.status} IN (${sql.join(
+        q.status.map((s) => sql`${s}`),
+        sql`, `,
+      )})`,
+    );
   if (q.hasPressures !== undefined) {
     where.push(sql`${q.hasPressures ? sql`` : sql`NOT`} EXISTS (SELECT 1 FROM ${pressureObservations} p WHERE p.well_id = ${outerId})`);
   }
@@ -72,7 +81,10 @@ export async function listWells(db: Db, teamId: string, q: ListQuery): Promise<W
       .orderBy(sql`${sortColumn} ${direction}`, asc(wells.name))
       .limit(q.limit)
       .offset(q.offset),
-    db.select({ total: sql<number>`count(*)::int` }).from(wells).where(and(...where)),
+    db
+      .select({ total: sql<number>`count(*)::int` })
+      .from(wells)
+      .where(and(...where)),
   ]);
   return { total, items: rows.map(toSummary) };
 }
@@ -101,7 +113,13 @@ async function wellRow(db: Db, teamId: string, wellId: string) {
 export async function getWell(db: Db, teamId: string, wellId: string): Promise<WellDetail> {
   const row = await wellRow(db, teamId, wellId);
   const tops = await db
-    .select({ id: formationTops.id, name: formationTops.name, mdM: formationTops.mdM, tvdM: formationTops.tvdM, lithology: formationTops.lithology })
+    .select({
+      id: formationTops.id,
+      name: formationTops.name,
+      mdM: formationTops.mdM,
+      tvdM: formationTops.tvdM,
+      lithology: formationTops.lithology,
+    })
     .from(formationTops)
     .where(eq(formationTops.wellId, wellId))
     .orderBy(formationTops.mdM);
@@ -133,13 +151,20 @@ export async function getWell(db: Db, teamId: string, wellId: string): Promise<W
 
 /** Ensures the well belongs to the team before its children are read. */
 async function assertWell(db: Db, teamId: string, wellId: string): Promise<void> {
-  const [row] = await db.select({ id: wells.id }).from(wells).where(and(eq(wells.teamId, teamId), eq(wells.id, wellId)));
+  const [row] = await db
+    .select({ id: wells.id })
+    .from(wells)
+    .where(and(eq(wells.teamId, teamId), eq(wells.id, wellId)));
   if (!row) throw notFound('That well');
 }
 
 export async function listPressures(db: Db, teamId: string, wellId: string): Promise<PressureObservation[]> {
   await assertWell(db, teamId, wellId);
-  const rows = await db.select().from(pressureObservations).where(eq(pressureObservations.wellId, wellId)).orderBy(pressureObservations.tvdM);
+  const rows = await db
+    .select()
+    .from(pressureObservations)
+    .where(eq(pressureObservations.wellId, wellId))
+    .orderBy(pressureObservations.tvdM);
   return rows.map((r) => ({
     id: r.id,
     kind: r.kind,

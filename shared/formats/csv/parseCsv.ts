@@ -22,7 +22,14 @@ export function parseCsv(input: string | Uint8Array, options: CsvParseOptions = 
   try {
     text = typeof input === 'string' ? input : decodeText(input).text;
   } catch {
-    return { delimiter: options.delimiter ?? ',', decimalComma: false, header: [], rows: [], raggedLines: [], problems: [{ line: 1, message: BINARY_FILE_MESSAGE }] };
+    return {
+      delimiter: options.delimiter ?? ',',
+      decimalComma: false,
+      header: [],
+      rows: [],
+      raggedLines: [],
+      problems: [{ line: 1, message: BINARY_FILE_MESSAGE }],
+    };
   }
   if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
 

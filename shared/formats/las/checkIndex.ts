@@ -81,7 +81,10 @@ export function orderIndex(data: DataColumns, header: IndexHeader, context: Inde
 
   const scale = header.step ? Math.abs(header.step) : 0;
   if (header.strt !== null && header.strtItem && !close(header.strt, index[first], scale)) {
-    context.warnings.add(header.strtItem.line, `STRT is ${header.strt} but the first index value is ${index[first]} (line ${lines[first]})`);
+    context.warnings.add(
+      header.strtItem.line,
+      `STRT is ${header.strt} but the first index value is ${index[first]} (line ${lines[first]})`,
+    );
   }
   if (header.stop !== null && header.stopItem && !close(header.stop, index[last], scale)) {
     context.warnings.add(header.stopItem.line, `STOP is ${header.stop} but the last index value is ${index[last]} (line ${lines[last]})`);

@@ -132,10 +132,7 @@ export function readData(lines: string[], start: number, end: number, options: D
     }
   }
   if (options.wrap && filled >= 0) {
-    options.errors.add(
-      recordLine,
-      `expected ${width - 1} values after the index ${row[0]}, found ${filled} before the data ends`,
-    );
+    options.errors.add(recordLine, `expected ${width - 1} values after the index ${row[0]}, found ${filled} before the data ends`);
   }
   return { columns, lineOfRow, afterRefused, rowCount };
 }

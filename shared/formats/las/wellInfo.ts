@@ -9,8 +9,21 @@ export const DEFAULT_LAS_NULL = -999.25;
 const TEXT_FIELDS = ['COMP', 'WELL', 'FLD', 'LOC', 'SRVC', 'DATE', 'UWI', 'API', 'PROV', 'CNTY', 'STAT', 'CTRY'] as const;
 /** LAS 1.2 put ~W texts after the colon with a label before it ("COMP.  COMPANY: ACME"); these labels give that away. */
 const LAS12_LABELS = new Set([
-  'COMPANY', 'WELL', 'FIELD', 'LOCATION', 'PROVINCE', 'COUNTY', 'STATE', 'COUNTRY', 'SERVICE COMPANY',
-  'DATE', 'LOG DATE', 'UNIQUE WELL ID', 'UWI', 'API', 'API NUMBER',
+  'COMPANY',
+  'WELL',
+  'FIELD',
+  'LOCATION',
+  'PROVINCE',
+  'COUNTY',
+  'STATE',
+  'COUNTRY',
+  'SERVICE COMPANY',
+  'DATE',
+  'LOG DATE',
+  'UNIQUE WELL ID',
+  'UWI',
+  'API',
+  'API NUMBER',
 ]);
 
 /**
@@ -19,12 +32,7 @@ const LAS12_LABELS = new Set([
  * @example
  * readWellInfo(items, section, false, warnings).NULL; // → -999.25
  */
-export function readWellInfo(
-  items: HeaderItem[],
-  section: RawSection | undefined,
-  isV12: boolean,
-  warnings: ProblemList,
-): LasWellInfo {
+export function readWellInfo(items: HeaderItem[], section: RawSection | undefined, isV12: boolean, warnings: ProblemList): LasWellInfo {
   const numberOf = (mnemonic: string, required: boolean): number | null => {
     const item = findItem(items, mnemonic);
     if (!item) {
@@ -76,8 +84,22 @@ export function readWellInfo(
  */
 export function emptyWellInfo(): LasWellInfo {
   return {
-    STRT: null, STOP: null, STEP: null, NULL: DEFAULT_LAS_NULL,
-    COMP: '', WELL: '', FLD: '', LOC: '', SRVC: '', DATE: '', UWI: '', API: '', PROV: '', CNTY: '', STAT: '', CTRY: '',
+    STRT: null,
+    STOP: null,
+    STEP: null,
+    NULL: DEFAULT_LAS_NULL,
+    COMP: '',
+    WELL: '',
+    FLD: '',
+    LOC: '',
+    SRVC: '',
+    DATE: '',
+    UWI: '',
+    API: '',
+    PROV: '',
+    CNTY: '',
+    STAT: '',
+    CTRY: '',
     items: [],
   };
 }

@@ -43,7 +43,10 @@ const Y_NAMES = ['Y', 'YCOORD', 'Y_COORD'];
  * @example parseDegrees(`101°06'00" W`, 'lon') // -101.1
  */
 export function parseDegrees(text: string, axis: 'lat' | 'lon'): number | null {
-  const s = text.trim().toUpperCase().replace(/DEG(REES?)?/g, ' ');
+  const s = text
+    .trim()
+    .toUpperCase()
+    .replace(/DEG(REES?)?/g, ' ');
   const letters = s.replace(/[^A-Z]/g, '');
   if (letters.length > 1 || (letters && !(axis === 'lat' ? 'NS' : 'EW').includes(letters))) return null;
   if (/[^0-9NSEW.\s°'"′″:+-]/.test(s)) return null;
@@ -65,13 +68,18 @@ export function parseDegrees(text: string, axis: 'lat' | 'lon'): number | null {
 export function readLasLocation(las: Pick<LasFile, 'well' | 'parameters'>): LasWellLocation {
   const items = [...las.well.items, ...las.parameters];
   const problems: Problem[] = [];
-  const find = (names: string[]): HeaderItem | undefined => items.find((i) => names.includes(i.mnemonic.toUpperCase()) && valueOf(i) !== '');
+  const find = (names: string[]): HeaderItem | undefined =>
+    items.find((i) => names.includes(i.mnemonic.toUpperCase()) && valueOf(i) !== '');
   const degrees = (names: string[], axis: 'lat' | 'lon'): LasCoordinate | null => {
     const item = find(names);
     if (!item) return null;
     const value = parseDegrees(valueOf(item), axis);
     if (value === null) {
-      problems.push({ line: item.line, column: item.mnemonic, message: `'${valueOf(item)}' is not a ${axis === 'lat' ? 'latitude' : 'longitude'} in degrees` });
+      problems.push({
+        line: item.line,
+        column: item.mnemonic,
+        message: `'${valueOf(item)}' is not a ${axis === 'lat' ? 'latitude' : 'longitude'} in degrees`,
+      });
       return null;
     }
     return { mnemonic: item.mnemonic, value, line: item.line };
@@ -82,7 +90,11 @@ export function readLasLocation(las: Pick<LasFile, 'well' | 'parameters'>): LasW
     const value = Number(valueOf(item));
     const unit = depth ? normaliseDepthUnit(item.unit) : 'm';
     if (!Number.isFinite(value) || unit === null) {
-      const why = !Number.isFinite(value) ? `'${valueOf(item)}' is not a number` : item.unit ? `its unit '${item.unit}' is not M or FT` : 'it has no unit (M or FT)';
+      const why = !Number.isFinite(value)
+        ? `'${valueOf(item)}' is not a number`
+        : item.unit
+          ? `its unit '${item.unit}' is not M or FT`
+          : 'it has no unit (M or FT)';
       problems.push({ line: item.line, column: item.mnemonic, message: `${item.mnemonic} cannot be read: ${why}` });
       return null;
     }
@@ -97,7 +109,10 @@ export function readLasLocation(las: Pick<LasFile, 'well' | 'parameters'>): LasW
   const epd = kb || df ? null : number(['EPD'], true);
   const apd = epd ? number(['APD'], true) : null;
   // Mnemonics vary by vendor (WDEP, WD, WATD; common practice, no source): the description settles it.
-  const wdItem = items.find((i) => (['WDEP', 'WD', 'WATD', 'WDEPTH'].includes(i.mnemonic.toUpperCase()) || /water\s*depth/i.test(i.description)) && valueOf(i) !== '');
+  const wdItem = items.find(
+    (i) =>
+      (['WDEP', 'WD', 'WATD', 'WDEPTH'].includes(i.mnemonic.toUpperCase()) || /water\s*depth/i.test(i.description)) && valueOf(i) !== '',
+  );
   const waterDepth = wdItem ? number([wdItem.mnemonic.toUpperCase()], true) : null;
   const groundElevation = number(['EGL'], true);
   const gdat = find(['GDAT']);
@@ -107,7 +122,13 @@ export function readLasLocation(las: Pick<LasFile, 'well' | 'parameters'>): LasW
     x,
     y,
     geodeticDatum: gdat ? valueOf(gdat) : '',
-    datumElevation: kb ? { ...kb, kind: 'KB' } : df ? { ...df, kind: 'DF' } : epd ? { ...epd, value: epd.value + (apd?.value ?? 0), mnemonic: apd ? `${epd.mnemonic}+${apd.mnemonic}` : epd.mnemonic, kind: 'RT' } : null,
+    datumElevation: kb
+      ? { ...kb, kind: 'KB' }
+      : df
+        ? { ...df, kind: 'DF' }
+        : epd
+          ? { ...epd, value: epd.value + (apd?.value ?? 0), mnemonic: apd ? `${epd.mnemonic}+${apd.mnemonic}` : epd.mnemonic, kind: 'RT' }
+          : null,
     waterDepth,
     groundElevation,
     problems: problems.sort((a, b) => a.line - b.line),

@@ -77,10 +77,12 @@ export function writeLas(input: LasWriteInput): string {
   const out: string[] = [];
 
   out.push('~VERSION INFORMATION');
-  out.push(...alignLines([
-    { mnemonic: 'VERS', unit: '', value: '2.0', description: 'CWLS LOG ASCII STANDARD - VERSION 2.0' },
-    { mnemonic: 'WRAP', unit: '', value: 'NO', description: 'ONE LINE PER DEPTH STEP' },
-  ]));
+  out.push(
+    ...alignLines([
+      { mnemonic: 'VERS', unit: '', value: '2.0', description: 'CWLS LOG ASCII STANDARD - VERSION 2.0' },
+      { mnemonic: 'WRAP', unit: '', value: 'NO', description: 'ONE LINE PER DEPTH STEP' },
+    ]),
+  );
 
   const wellLines: Line[] = [
     { mnemonic: 'STRT', unit: unitText, value: formatLasNumber(first), description: 'START DEPTH' },
@@ -101,19 +103,25 @@ export function writeLas(input: LasWriteInput): string {
   out.push(...alignLines(wellLines));
 
   out.push('~CURVE INFORMATION');
-  out.push(...alignLines([
-    curveLine({ mnemonic: indexMnemonic, unit: unitText, apiCode: index.apiCode, description: index.description ?? 'DEPTH' }),
-    ...curves.map(curveLine),
-  ]));
+  out.push(
+    ...alignLines([
+      curveLine({ mnemonic: indexMnemonic, unit: unitText, apiCode: index.apiCode, description: index.description ?? 'DEPTH' }),
+      ...curves.map(curveLine),
+    ]),
+  );
 
   if (input.parameters && input.parameters.length > 0) {
     out.push('~PARAMETER INFORMATION');
-    out.push(...alignLines(input.parameters.map((p) => {
-      checkMnemonic(p.mnemonic);
-      const line = { mnemonic: p.mnemonic, unit: p.unit ?? '', value: p.value, description: p.description ?? '' };
-      checkHeaderLine(line, `parameter ${p.mnemonic}`);
-      return line;
-    })));
+    out.push(
+      ...alignLines(
+        input.parameters.map((p) => {
+          checkMnemonic(p.mnemonic);
+          const line = { mnemonic: p.mnemonic, unit: p.unit ?? '', value: p.value, description: p.description ?? '' };
+          checkHeaderLine(line, `parameter ${p.mnemonic}`);
+          return line;
+        }),
+      ),
+    );
   }
 
   if (input.other) {
@@ -192,8 +200,10 @@ function checkCurveValues(curve: LasWriteCurve, n: number, nullValue: number): v
   }
   for (let i = 0; i < n; i++) {
     const v = curve.values[i];
-    if (v === nullValue) throw new Error(`writeLas: curve ${curve.mnemonic} holds the NULL value ${nullValue} at row ${i}; choose another NULL`);
-    if (!Number.isNaN(v) && !Number.isFinite(v)) throw new Error(`writeLas: curve ${curve.mnemonic} has a non-finite value ${v} at row ${i}`);
+    if (v === nullValue)
+      throw new Error(`writeLas: curve ${curve.mnemonic} holds the NULL value ${nullValue} at row ${i}; choose another NULL`);
+    if (!Number.isNaN(v) && !Number.isFinite(v))
+      throw new Error(`writeLas: curve ${curve.mnemonic} has a non-finite value ${v} at row ${i}`);
   }
 }
 

@@ -117,7 +117,9 @@ describe('problems by line', () => {
       'line 6, column Latitude: Latitude or northing is required',
     ]);
     // The example sentence from the format's own documentation (shared/formats/problem.ts).
-    expect(describeProblem({ line: 12, column: 'md', message: "'abc' is not a number" }, [])).toBe("line 12, column md: 'abc' is not a number");
+    expect(describeProblem({ line: 12, column: 'md', message: "'abc' is not a number" }, [])).toBe(
+      "line 12, column md: 'abc' is not a number",
+    );
     expect(problemColumn({ line: 1, message: 'no column' }, columns)).toBeUndefined();
   });
 
@@ -154,7 +156,9 @@ describe('commitBlocker', () => {
   });
 
   it('refuses when nothing is valid, a LAS file has problems, or a re-import has no decision', () => {
-    expect(commitBlocker({ ...preview, counts: { records: 5, invalid: 5, valid: 0 } }, { skipInvalid: true, onDuplicate: null })).toMatch(/Nothing to import/);
+    expect(commitBlocker({ ...preview, counts: { records: 5, invalid: 5, valid: 0 } }, { skipInvalid: true, onDuplicate: null })).toMatch(
+      /Nothing to import/,
+    );
     expect(commitBlocker({ ...preview, kind: 'las' }, { skipInvalid: true, onDuplicate: null })).toMatch(/whole or not at all/);
     const again = { ...preview, problems: [], duplicateOf: { uploadId: 'u', fileName: 'a.csv', createdAt: '2025-01-01T00:00:00Z' } };
     expect(commitBlocker(again, { skipInvalid: false, onDuplicate: null })).toMatch(/imported before/);
@@ -165,19 +169,29 @@ describe('commitBlocker', () => {
 describe('outcomeSummary', () => {
   it('says what each kind wrote, and how many lines were skipped', () => {
     // Outcome shapes as server/features/imports/importWriter.ts returns them.
-    expect(outcomeSummary('wells', { created: 1, updated: 0, skippedLines: [3, 4, 5, 6] })).toBe('1 well created, 0 updated · 4 lines skipped');
+    expect(outcomeSummary('wells', { created: 1, updated: 0, skippedLines: [3, 4, 5, 6] })).toBe(
+      '1 well created, 0 updated · 4 lines skipped',
+    );
     expect(outcomeSummary('surveys', { created: 6, wells: 1, skippedLines: [] })).toBe('6 stations for 1 well');
     expect(outcomeSummary('las', { created: 4, skippedLines: [] })).toBe('4 log curves');
     expect(outcomeSummary('pressures', {})).toBe('no outcome recorded');
   });
 
   it('says when a LAS import created its well and when an update replaced earlier rows', () => {
-    expect(outcomeSummary('las', { created: 4, wellCreated: true, replaced: 0, skippedLines: [] })).toBe('4 log curves into a well created from the file');
-    expect(outcomeSummary('pressures', { created: 4, replaced: 4, skippedLines: [] })).toBe('4 pressure observations · 4 rows of the earlier import replaced');
+    expect(outcomeSummary('las', { created: 4, wellCreated: true, replaced: 0, skippedLines: [] })).toBe(
+      '4 log curves into a well created from the file',
+    );
+    expect(outcomeSummary('pressures', { created: 4, replaced: 4, skippedLines: [] })).toBe(
+      '4 pressure observations · 4 rows of the earlier import replaced',
+    );
   });
 
   it('names the well a LAS import wrote to, as the server records it', () => {
-    expect(outcomeSummary('las', { created: 3, wellCreated: false, wellName: 'KESTREL-3', skippedLines: [] })).toBe('3 log curves into well KESTREL-3');
-    expect(outcomeSummary('las', { created: 4, wellCreated: true, wellName: 'OSPREY-9', skippedLines: [] })).toBe('4 log curves into new well OSPREY-9 (created from the file)');
+    expect(outcomeSummary('las', { created: 3, wellCreated: false, wellName: 'KESTREL-3', skippedLines: [] })).toBe(
+      '3 log curves into well KESTREL-3',
+    );
+    expect(outcomeSummary('las', { created: 4, wellCreated: true, wellName: 'OSPREY-9', skippedLines: [] })).toBe(
+      '4 log curves into new well OSPREY-9 (created from the file)',
+    );
   });
 });

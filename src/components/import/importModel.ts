@@ -171,7 +171,10 @@ export function describeProblem(problem: ImportProblem, columns: readonly { name
  * @example sortProblems([{ line: 6, message: 'b' }, { line: 3, message: 'a' }]).map((p) => p.line) // [3, 6]
  */
 export function sortProblems(problems: readonly ImportProblem[]): ImportProblem[] {
-  return problems.map((p, i) => ({ p, i })).sort((a, b) => a.p.line - b.p.line || a.i - b.i).map(({ p }) => p);
+  return problems
+    .map((p, i) => ({ p, i }))
+    .sort((a, b) => a.p.line - b.p.line || a.i - b.i)
+    .map(({ p }) => p);
 }
 
 /** One line of the preview table: a parsed row, or a line left out for its problems. */
@@ -189,7 +192,11 @@ export const PREVIEW_ROW_LIMIT = 50;
  * (the first 50); invalid lines are slotted in where they fall, up to the last line the preview reaches.
  * @example previewLines([{ line: 2 }, { line: 4 }], [{ line: 3, message: 'bad' }], [3]).map((l) => l.line) // [2, 3, 4]
  */
-export function previewLines(rows: readonly PreviewRow[], problems: readonly ImportProblem[], invalidLines: readonly number[]): PreviewLine[] {
+export function previewLines(
+  rows: readonly PreviewRow[],
+  problems: readonly ImportProblem[],
+  invalidLines: readonly number[],
+): PreviewLine[] {
   const byLine = problemsByLine(problems);
   const lines: PreviewLine[] = rows.map((row) => {
     const line = Number(row.line);
@@ -256,7 +263,10 @@ export function outcomeSummary(kind: ImportKind, outcome: Record<string, unknown
           : ''
     }`,
   };
-  const replaced = typeof outcome.replaced === 'number' && outcome.replaced > 0 ? ` · ${plural(outcome.replaced, 'row')} of the earlier import replaced` : '';
+  const replaced =
+    typeof outcome.replaced === 'number' && outcome.replaced > 0
+      ? ` · ${plural(outcome.replaced, 'row')} of the earlier import replaced`
+      : '';
   return `${main[kind]}${replaced}${skipped > 0 ? ` · ${plural(skipped, 'line')} skipped` : ''}`;
 }
 
@@ -277,7 +287,9 @@ const DELIMITER_NAMES: Record<string, string> = { ',': 'comma', ';': 'semicolon'
  * @example delimiterName('\t') // 'tab'
  */
 export function delimiterName(delimiter: string): string {
-  return DELIMITER_NAMES[delimiter] ? `${DELIMITER_NAMES[delimiter]}${delimiter.trim() ? ` ( ${delimiter} )` : ''}` : JSON.stringify(delimiter);
+  return DELIMITER_NAMES[delimiter]
+    ? `${DELIMITER_NAMES[delimiter]}${delimiter.trim() ? ` ( ${delimiter} )` : ''}`
+    : JSON.stringify(delimiter);
 }
 
 /** Names the well rows of a preview refer to, for links after the import (first `limit`, unique). */

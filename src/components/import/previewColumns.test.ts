@@ -8,7 +8,17 @@ describe('preview cells', () => {
   it('shows the SI values of a pressure row in the reader units, with the unit in the title', () => {
     // A 16.5 ppg LOT at 1500 m TVD: EMW 16.5 × 119.826427 kg/m³; p = ρ·g·TVD with g = 9.80665 m/s².
     const emwKgM3 = 16.5 * 119.826427;
-    const row = { line: 3, wellName: 'TEST-2', kind: 'lot', mdM: 1524, tvdM: 1500, valueEntered: 16.5, unitEntered: 'ppg', pressurePa: emwKgM3 * 9.80665 * 1500, emwKgM3 };
+    const row = {
+      line: 3,
+      wellName: 'TEST-2',
+      kind: 'lot',
+      mdM: 1524,
+      tvdM: 1500,
+      valueEntered: 16.5,
+      unitEntered: 'ppg',
+      pressurePa: emwKgM3 * 9.80665 * 1500,
+      emwKgM3,
+    };
     expect(previewCell(spec('pressures', 'kind'), row, inField)).toBe('Leak-off test');
     expect(previewCell(spec('pressures', 'mdM'), row, inField)).toBe('5,000'); // 1524 m = 5000 ft
     expect(previewCell(spec('pressures', 'emwKgM3'), row, inField)).toBe('16.5');

@@ -4,7 +4,14 @@ import { installFakeServer, jsonReply } from '@/testing/fakeServer';
 import { mountInApp } from '@/testing/mountInApp';
 import OffsetSetList from './OffsetSetList.vue';
 
-const entry = (wellId: string, name: string) => ({ wellId, name, reason: null, addedBy: null, addedByName: 'P', addedAt: '2026-11-30T10:00:00Z' });
+const entry = (wellId: string, name: string) => ({
+  wellId,
+  name,
+  reason: null,
+  addedBy: null,
+  addedByName: 'P',
+  addedAt: '2026-11-30T10:00:00Z',
+});
 const A = '3f1d2c4b-5a6e-4f70-8a9b-0c1d2e3f4a5b';
 const B = '9a8b7c6d-5e4f-4a3b-8c2d-1e0f9a8b7c6d';
 

@@ -6,10 +6,29 @@ import { mountInApp } from '@/testing/mountInApp';
 import { useAtlasStore } from '@/stores/atlas';
 import ProspectCard from './ProspectCard.vue';
 
-const PROSPECT = { id: '7c1d2e3f-4a5b-4c6d-8e7f-9a0b1c2d3e4f', name: 'Lantern Screen', areaKm2: 20, targetTopM: 2800, targetBaseM: 3500, notes: null, version: 1, updatedAt: '2026-11-30T10:00:00Z', geometry: { type: 'Polygon', coordinates: [] } };
+const PROSPECT = {
+  id: '7c1d2e3f-4a5b-4c6d-8e7f-9a0b1c2d3e4f',
+  name: 'Lantern Screen',
+  areaKm2: 20,
+  targetTopM: 2800,
+  targetBaseM: 3500,
+  notes: null,
+  version: 1,
+  updatedAt: '2026-11-30T10:00:00Z',
+  geometry: { type: 'Polygon', coordinates: [] },
+};
 const PLANNED = {
-  id: '1e2d3c4b-5a69-4877-8695-a4b3c2d1e0f9', name: 'Lantern-1 (planned)', prospectId: PROSPECT.id, location: { type: 'Point', coordinates: [-101, -32.5] },
-  datumElevationM: 25, waterDepthM: 110, waterDepthSource: 'nearest-wells', plannedTdM: 3725, notes: null, version: 1, updatedAt: '2026-01-01T00:00:00Z',
+  id: '1e2d3c4b-5a69-4877-8695-a4b3c2d1e0f9',
+  name: 'Lantern-1 (planned)',
+  prospectId: PROSPECT.id,
+  location: { type: 'Point', coordinates: [-101, -32.5] },
+  datumElevationM: 25,
+  waterDepthM: 110,
+  waterDepthSource: 'nearest-wells',
+  plannedTdM: 3725,
+  notes: null,
+  version: 1,
+  updatedAt: '2026-01-01T00:00:00Z',
 };
 
 describe('ProspectCard', () => {

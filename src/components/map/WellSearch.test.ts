@@ -7,9 +7,23 @@ import WellSearch from './WellSearch.vue';
 
 // The reply is parsed with the shared contract schema, so it has the shape GET /wells sends.
 const avx = wellSummarySchema.parse({
-  id: '22222222-2222-4222-8222-222222222222', name: 'AVX-01', uwi: 'AVB-02-0006-00', operator: null, lon: -101.3, lat: -32.6,
-  status: 'drilled', offshore: true, waterDepthM: 100, tdMdM: 3000, tdTvdM: 3000, spudDate: null, pressureCount: 1,
-  logCount: 1, hasSurvey: false, hasLot: false, updatedAt: '2026-01-01T00:00:00Z',
+  id: '22222222-2222-4222-8222-222222222222',
+  name: 'AVX-01',
+  uwi: 'AVB-02-0006-00',
+  operator: null,
+  lon: -101.3,
+  lat: -32.6,
+  status: 'drilled',
+  offshore: true,
+  waterDepthM: 100,
+  tdMdM: 3000,
+  tdTvdM: 3000,
+  spudDate: null,
+  pressureCount: 1,
+  logCount: 1,
+  hasSurvey: false,
+  hasLot: false,
+  updatedAt: '2026-01-01T00:00:00Z',
 });
 
 describe('WellSearch', () => {

@@ -13,20 +13,49 @@ const profile = buildProfile({
   logs: { sonicUsFt: tvdM.map((z) => 60 + 130 * Math.exp(-4.5e-4 * (z - 125))), gammaApi: tvdM.map(() => 90) },
   interpretation: {
     normalDensityKgM3: 1030,
-    trend: { curve: 'sonic', model: 'exponential', fromM: 500, toM: 1500, params: { matrix: 60, surface: 190, cPerM: 4.5e-4 }, gammaCutoffApi: null },
+    trend: {
+      curve: 'sonic',
+      model: 'exponential',
+      fromM: 500,
+      toM: 1500,
+      params: { matrix: 60, surface: 190, cPerM: 4.5e-4 },
+      gammaCutoffApi: null,
+    },
     pore: { method: 'eaton-sonic', exponent: 3 },
     fracture: { method: 'eaton', poissonTop: 0.3, poissonGradientPerKm: 0.04 },
   },
 });
-const obs = (id: string, kind: PressureObservation['kind'], quality: PressureObservation['quality'], tvd: number, kgM3: number): PressureObservation => ({
-  id, kind, quality, mdM: tvd, tvdM: tvd, valueEntered: 0, unitEntered: 'MPa', valueSi: kgM3 * G * tvd, emwKgM3: kgM3, fluid: null, observedOn: null, source: null,
+const obs = (
+  id: string,
+  kind: PressureObservation['kind'],
+  quality: PressureObservation['quality'],
+  tvd: number,
+  kgM3: number,
+): PressureObservation => ({
+  id,
+  kind,
+  quality,
+  mdM: tvd,
+  tvdM: tvd,
+  valueEntered: 0,
+  unitEntered: 'MPa',
+  valueSi: kgM3 * G * tvd,
+  emwKgM3: kgM3,
+  fluid: null,
+  observedOn: null,
+  source: null,
 });
 
 function mountFigure(props: Record<string, unknown> = {}) {
   return mount(ProfileFigure, {
     props: {
       profile,
-      observations: [obs('a', 'formation_test', 'good', 1200, 1040), obs('b', 'formation_test', 'tight', 1300, 1100), obs('c', 'lot', 'good', 800, 1600), obs('d', 'mud_weight', 'unknown', 900, 1100)],
+      observations: [
+        obs('a', 'formation_test', 'good', 1200, 1040),
+        obs('b', 'formation_test', 'tight', 1300, 1100),
+        obs('c', 'lot', 'good', 800, 1600),
+        obs('d', 'mud_weight', 'unknown', 900, 1100),
+      ],
       tops: [{ name: 'Pellam Clay', mdM: 700, tvdM: 700 }],
       frame: { mode: 'tvd', datum: 'sl', unit: 'ft' },
       view: 'pressure',
@@ -61,7 +90,19 @@ describe('ProfileFigure', () => {
       expect(w.find(`[data-testid="${id}"]`).exists()).toBe(true);
     }
     const keys = w.findAll('[data-legend]').map((g) => g.attributes('data-legend'));
-    expect(keys).toEqual(['hydrostatic', 'overburden', 'pore', 'fracture', 'mud', 'obs-Leak-off test', 'obs-Formation test (tight, supercharged or doubtful)', 'obs-Formation test (good)', 'top', 'trend', 'tops']);
+    expect(keys).toEqual([
+      'hydrostatic',
+      'overburden',
+      'pore',
+      'fracture',
+      'mud',
+      'obs-Leak-off test',
+      'obs-Formation test (tight, supercharged or doubtful)',
+      'obs-Formation test (good)',
+      'top',
+      'trend',
+      'tops',
+    ]);
     const ys = w.findAll('[data-legend]').map((g) => Number(/translate\([^,]+, ([\d.]+)\)/.exec(g.attributes('transform') ?? '')![1]));
     for (let i = 1; i < ys.length; i++) expect(ys[i] - ys[i - 1]).toBeGreaterThanOrEqual(14);
     // mud weights are a line, not points: three point observations

@@ -7,7 +7,15 @@ const base = { view: 'pressure', mode: 'tvd', datum: 'rt', depthUnit: 'm', press
 
 describe('ProfileToolbar', () => {
   it('offers TVD and MD unless told not to', () => {
-    expect(mount(ProfileToolbar, { props: { ...base } }).find('[data-testid="mode-md"]').exists()).toBe(true);
-    expect(mount(ProfileToolbar, { props: { ...base, allowMd: false } }).find('[data-testid="mode-md"]').exists()).toBe(false);
+    expect(
+      mount(ProfileToolbar, { props: { ...base } })
+        .find('[data-testid="mode-md"]')
+        .exists(),
+    ).toBe(true);
+    expect(
+      mount(ProfileToolbar, { props: { ...base, allowMd: false } })
+        .find('[data-testid="mode-md"]')
+        .exists(),
+    ).toBe(false);
   });
 });

@@ -5,7 +5,9 @@
  */
 export function clampTyped(value: number, min?: number, max?: number): { value: number; message: string | null } {
   const show = (v: number) => String(v).replace('-', '−');
-  if (min !== undefined && value < min) return { value: min, message: `${show(value)} is below the lowest allowed, ${show(min)}: set to ${show(min)}.` };
-  if (max !== undefined && value > max) return { value: max, message: `${show(value)} is above the highest allowed, ${show(max)}: set to ${show(max)}.` };
+  if (min !== undefined && value < min)
+    return { value: min, message: `${show(value)} is below the lowest allowed, ${show(min)}: set to ${show(min)}.` };
+  if (max !== undefined && value > max)
+    return { value: max, message: `${show(value)} is above the highest allowed, ${show(max)}: set to ${show(max)}.` };
   return { value, message: null };
 }

@@ -16,7 +16,10 @@ describe('toSurfaceRequest', () => {
   });
 
   it('converts feet to metres with the international foot (0.3048 m exactly, NIST SP 811 B.9)', () => {
-    const body = toSurfaceRequest({ ...DEFAULT_RUN_FORM, contourInterval: 100, variogramByHand: true, nugget: 100, sill: 10_000, rangeKm: 12 }, 'ft');
+    const body = toSurfaceRequest(
+      { ...DEFAULT_RUN_FORM, contourInterval: 100, variogramByHand: true, nugget: 100, sill: 10_000, rangeKm: 12 },
+      'ft',
+    );
     expect(body.contourIntervalM).toBeCloseTo(30.48, 12);
     // A variance carries the square of the length unit: 1 ft² = 0.09290304 m².
     expect(body.method).toMatchObject({ kind: 'kriging', variogram: { model: 'spherical', range: 12_000 } });
@@ -32,19 +35,37 @@ describe('toSurfaceRequest', () => {
   });
 
   it('uses a planned well’s offset set and inverse distance when asked', () => {
-    const body = toSurfaceRequest({ ...DEFAULT_RUN_FORM, wellSource: 'offset-set', plannedWellId: PLANNED, method: 'idw', power: 3, name: '  IDW check ' }, 'm');
-    expect(body).toMatchObject({ name: 'IDW check', wells: { from: 'offset-set', plannedWellId: PLANNED }, method: { kind: 'idw', power: 3 } });
+    const body = toSurfaceRequest(
+      { ...DEFAULT_RUN_FORM, wellSource: 'offset-set', plannedWellId: PLANNED, method: 'idw', power: 3, name: '  IDW check ' },
+      'm',
+    );
+    expect(body).toMatchObject({
+      name: 'IDW check',
+      wells: { from: 'offset-set', plannedWellId: PLANNED },
+      method: { kind: 'idw', power: 3 },
+    });
     expect(surfaceRequestBody.safeParse(body).success).toBe(true);
   });
 
   it('asks for the planned well before using an offset set', () => {
-    expect(() => toSurfaceRequest({ ...DEFAULT_RUN_FORM, wellSource: 'offset-set' }, 'm')).toThrow('Choose the planned well whose offset set to use.');
+    expect(() => toSurfaceRequest({ ...DEFAULT_RUN_FORM, wellSource: 'offset-set' }, 'm')).toThrow(
+      'Choose the planned well whose offset set to use.',
+    );
   });
 });
 
 describe('toSurfaceRequest for quantities at a depth', () => {
   it('sends the depth in metres and the contour interval and variogram in the quantity’s SI unit', () => {
-    const form = { ...DEFAULT_RUN_FORM, quantity: 'emw_at_depth' as const, depth: 10_000, contourInterval: 0.1, variogramByHand: true, nugget: 0, sill: 1, rangeKm: 10 };
+    const form = {
+      ...DEFAULT_RUN_FORM,
+      quantity: 'emw_at_depth' as const,
+      depth: 10_000,
+      contourInterval: 0.1,
+      variogramByHand: true,
+      nugget: 0,
+      sill: 1,
+      rangeKm: 10,
+    };
     const body = toSurfaceRequest(form, 'ft', { pressure: 'MPa', emw: 'ppg' });
     // 10,000 ft = 3048 m (international foot, NIST SP 811 B.9).
     expect(body.depthTvdssM).toBeCloseTo(3048, 9);
@@ -52,13 +73,18 @@ describe('toSurfaceRequest for quantities at a depth', () => {
     expect(body.contourIntervalKgM3).toBeCloseTo(11.9826427, 6);
     expect((body.method as { variogram: { sill: number } }).variogram.sill).toBeCloseTo(119.826427 ** 2, 3);
     expect(surfaceRequestBody.safeParse(body).success).toBe(true);
-    const op = toSurfaceRequest({ ...DEFAULT_RUN_FORM, quantity: 'overpressure_at_depth', depth: 3000, contourInterval: 100 }, 'm', { pressure: 'psi', emw: 'sg' });
+    const op = toSurfaceRequest({ ...DEFAULT_RUN_FORM, quantity: 'overpressure_at_depth', depth: 3000, contourInterval: 100 }, 'm', {
+      pressure: 'psi',
+      emw: 'sg',
+    });
     // 1 psi = 6894.757 Pa (NIST SP 811 B.9).
     expect(op.contourIntervalPa).toBeCloseTo(689_475.7, 0);
     expect(op.depthTvdssM).toBe(3000);
   });
 
   it('asks for the depth before running an at-depth quantity', () => {
-    expect(() => toSurfaceRequest({ ...DEFAULT_RUN_FORM, quantity: 'overpressure_at_depth' }, 'm')).toThrow('Give the depth below sea level to read the pore pressure at.');
+    expect(() => toSurfaceRequest({ ...DEFAULT_RUN_FORM, quantity: 'overpressure_at_depth' }, 'm')).toThrow(
+      'Give the depth below sea level to read the pore pressure at.',
+    );
   });
 });

@@ -1,5 +1,11 @@
 import { FT_M } from '@shared/units';
-import { AT_DEPTH_QUANTITIES, DEFAULT_CONTOUR_INTERVALS, SURFACE_QUANTITY_KINDS, type SurfaceQuantity, type SurfaceRequest } from '@shared/schemas/surfaces';
+import {
+  AT_DEPTH_QUANTITIES,
+  DEFAULT_CONTOUR_INTERVALS,
+  SURFACE_QUANTITY_KINDS,
+  type SurfaceQuantity,
+  type SurfaceRequest,
+} from '@shared/schemas/surfaces';
 import { DEFAULT_UNITS, type DisplayDepthUnit, type UnitPreferences } from '@/stores/units';
 import { surfaceDisplay } from './surfaceDisplay';
 
@@ -77,16 +83,23 @@ export function quantityDefaults(quantity: SurfaceQuantity, units: UnitPreferenc
  * the display depth unit to metres (a variance scales with the square of the length unit).
  * @example toSurfaceRequest({ ...DEFAULT_RUN_FORM, contourInterval: 100 }, 'ft').contourIntervalM // 30.48
  */
-export function toSurfaceRequest(form: SurfaceRunForm, depthUnit: DisplayDepthUnit, units: Pick<UnitPreferences, 'pressure' | 'emw'> = DEFAULT_UNITS): SurfaceRequest {
+export function toSurfaceRequest(
+  form: SurfaceRunForm,
+  depthUnit: DisplayDepthUnit,
+  units: Pick<UnitPreferences, 'pressure' | 'emw'> = DEFAULT_UNITS,
+): SurfaceRequest {
   if (form.wellSource === 'offset-set' && !form.plannedWellId) throw new Error('Choose the planned well whose offset set to use.');
   const atDepth = AT_DEPTH_QUANTITIES.includes(form.quantity);
-  if (atDepth && (form.depth === null || !Number.isFinite(form.depth) || form.depth < 0)) throw new Error('Give the depth below sea level to read the pore pressure at.');
+  if (atDepth && (form.depth === null || !Number.isFinite(form.depth) || form.depth < 0))
+    throw new Error('Give the depth below sea level to read the pore pressure at.');
   const kind = SURFACE_QUANTITY_KINDS[form.quantity];
   // The display unit per SI unit of the quantity; a variance scales with its square.
   const toM = depthUnit === 'ft' ? FT_M : 1;
   const toSi = kind === 'depth' ? toM : 1 / surfaceDisplay(form.quantity, { depth: depthUnit, ...units }).factor;
   const wells: SurfaceRequest['wells'] =
-    form.wellSource === 'prospect' ? { from: 'prospect', bufferKm: form.bufferKm } : { from: 'offset-set', plannedWellId: form.plannedWellId as string };
+    form.wellSource === 'prospect'
+      ? { from: 'prospect', bufferKm: form.bufferKm }
+      : { from: 'offset-set', plannedWellId: form.plannedWellId as string };
   const method: SurfaceRequest['method'] =
     form.method === 'idw'
       ? { kind: 'idw', power: form.power }
@@ -95,7 +108,9 @@ export function toSurfaceRequest(form: SurfaceRunForm, depthUnit: DisplayDepthUn
           model: form.model,
           maxNeighbours: form.maxNeighbours,
           trend: form.removeTrend ? 'planar' : 'none',
-          variogram: form.variogramByHand ? { model: form.model, nugget: form.nugget * toSi * toSi, sill: form.sill * toSi * toSi, range: form.rangeKm * 1000 } : null,
+          variogram: form.variogramByHand
+            ? { model: form.model, nugget: form.nugget * toSi * toSi, sill: form.sill * toSi * toSi, range: form.rangeKm * 1000 }
+            : null,
         };
   const body: SurfaceRequest = {
     quantity: form.quantity,

@@ -58,7 +58,10 @@ describe('well header edit', () => {
 
   it('checks the body with the shared contract, keyed by form field, limits in the reader unit', () => {
     // wellPatchBody: name 1–120 characters, water depth 0–4000 m.
-    expect(checkPatch({ version: 3, name: '', waterDepthM: 5000 }, 'm')).toEqual({ name: 'is required', waterDepth: 'must be at most 4000 m' });
+    expect(checkPatch({ version: 3, name: '', waterDepthM: 5000 }, 'm')).toEqual({
+      name: 'is required',
+      waterDepth: 'must be at most 4000 m',
+    });
     // 4000 m / 0.3048 = 13,123.4 ft.
     expect(checkPatch({ version: 3, waterDepthM: -1 }, 'ft')).toEqual({ waterDepth: 'must be at least 0 ft (0 m)' });
     expect(checkPatch({ version: 3, waterDepthM: 4001 }, 'ft').waterDepth).toBe('must be at most 13,123.4 ft (4000 m)');

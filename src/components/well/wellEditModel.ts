@@ -99,10 +99,16 @@ export function checkPatch(body: WellPatchBody, unit: DisplayDepthUnit): FieldEr
     const isDepth = key in FORM_FIELD_OF;
     if (issue.code === 'too_small') {
       const min = Number(issue.minimum);
-      out[field] = issue.origin === 'string' ? (min <= 1 ? 'is required' : `needs at least ${min} characters`) : `must be at least ${isDepth ? limitText(min, unit) : min}`;
+      out[field] =
+        issue.origin === 'string'
+          ? min <= 1
+            ? 'is required'
+            : `needs at least ${min} characters`
+          : `must be at least ${isDepth ? limitText(min, unit) : min}`;
     } else if (issue.code === 'too_big') {
       const max = Number(issue.maximum);
-      out[field] = issue.origin === 'string' ? `can have at most ${max} characters` : `must be at most ${isDepth ? limitText(max, unit) : max}`;
+      out[field] =
+        issue.origin === 'string' ? `can have at most ${max} characters` : `must be at most ${isDepth ? limitText(max, unit) : max}`;
     } else {
       out[field] = issue.message;
     }

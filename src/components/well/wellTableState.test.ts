@@ -9,14 +9,38 @@ const serverReads = (state: typeof DEFAULT_TABLE_STATE) =>
 
 describe('wells table state', () => {
   it('asks page n of size s from offset (n − 1)·s with the filters, as the server reads it', () => {
-    const state = { ...DEFAULT_TABLE_STATE, q: ' avx ', status: ['drilled' as const], pressuresOnly: true, sort: 'spudDate' as const, order: 'desc' as const, page: 3, pageSize: 50 };
-    expect(serverReads(state)).toEqual({ q: 'avx', status: ['drilled'], hasPressures: true, sort: 'spudDate', order: 'desc', limit: 50, offset: 100 });
+    const state = {
+      ...DEFAULT_TABLE_STATE,
+      q: ' avx ',
+      status: ['drilled' as const],
+      pressuresOnly: true,
+      sort: 'spudDate' as const,
+      order: 'desc' as const,
+      page: 3,
+      pageSize: 50,
+    };
+    expect(serverReads(state)).toEqual({
+      q: 'avx',
+      status: ['drilled'],
+      hasPressures: true,
+      sort: 'spudDate',
+      order: 'desc',
+      limit: 50,
+      offset: 100,
+    });
     // The toggle off means "any well", not "wells without pressures".
     expect(serverReads(DEFAULT_TABLE_STATE).hasPressures).toBeUndefined();
   });
 
   it('survives the round trip through the address, and keeps plain /wells plain', () => {
-    const state = { ...DEFAULT_TABLE_STATE, q: 'AVX', status: ['drilled' as const, 'abandoned' as const], page: 2, pageSize: 100, sort: 'tdMdM' as const };
+    const state = {
+      ...DEFAULT_TABLE_STATE,
+      q: 'AVX',
+      status: ['drilled' as const, 'abandoned' as const],
+      page: 2,
+      pageSize: 100,
+      sort: 'tdMdM' as const,
+    };
     const query = routeFromState(state);
     expect(query).toEqual({ q: 'AVX', status: 'drilled,abandoned', page: '2', size: '100', sort: 'tdMdM' });
     expect(stateFromRoute(query as Record<string, string>)).toEqual(state);

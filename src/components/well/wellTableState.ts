@@ -46,9 +46,7 @@ export function stateFromRoute(query: LocationQuery): WellTableState {
   const pageSize = positiveInt(first(query.size), DEFAULT_TABLE_STATE.pageSize);
   return {
     q: first(query.q) ?? '',
-    status: (first(query.status) ?? '')
-      .split(',')
-      .filter((s): s is WellStatus => (WELL_STATUSES as readonly string[]).includes(s)),
+    status: (first(query.status) ?? '').split(',').filter((s): s is WellStatus => (WELL_STATUSES as readonly string[]).includes(s)),
     pressuresOnly: first(query.pressures) === '1',
     sort: (WELL_SORTS as readonly string[]).includes(sort ?? '') ? (sort as WellSort) : DEFAULT_TABLE_STATE.sort,
     order: first(query.order) === 'desc' ? 'desc' : 'asc',

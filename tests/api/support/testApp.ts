@@ -94,7 +94,11 @@ export async function createOtherTeam(ctx: TestContext, name: string) {
  * A fresh team with one member of the given role, signed in; each test file gets its own team so
  * files never see each other's wells.
  */
-export async function freshTeamAgent(ctx: TestContext, label: string, role: 'admin' | 'geoscientist' | 'planner' | 'viewer' = 'geoscientist') {
+export async function freshTeamAgent(
+  ctx: TestContext,
+  label: string,
+  role: 'admin' | 'geoscientist' | 'planner' | 'viewer' = 'geoscientist',
+) {
   const { randomUUID } = await import('node:crypto');
   const bcrypt = (await import('bcryptjs')).default;
   const { users, memberships } = await import('../../../server/db/schema');
@@ -102,7 +106,10 @@ export async function freshTeamAgent(ctx: TestContext, label: string, role: 'adm
   const team = await createOtherTeam(ctx, `${label} ${suffix}`);
   const email = `${role}-${suffix}@porelith.example`;
   const password = 'fresh-team-password';
-  const [user] = await ctx.db.insert(users).values({ email, name: `${label} ${role}`, passwordHash: await bcrypt.hash(password, 4) }).returning();
+  const [user] = await ctx.db
+    .insert(users)
+    .values({ email, name: `${label} ${role}`, passwordHash: await bcrypt.hash(password, 4) })
+    .returning();
   await ctx.db.insert(memberships).values({ teamId: team.id, userId: user.id, role });
   const agent = await signedInAgent(ctx, email, password);
   return { teamId: team.id, userId: user.id, email, password, agent };
@@ -114,7 +121,10 @@ export async function memberAgent(ctx: TestContext, teamId: string, role: 'admin
   const bcrypt = (await import('bcryptjs')).default;
   const { users, memberships } = await import('../../../server/db/schema');
   const email = `${role}-${randomUUID().slice(0, 8)}@porelith.example`;
-  const [user] = await ctx.db.insert(users).values({ email, name: `Member ${role}`, passwordHash: await bcrypt.hash('member-password', 4) }).returning();
+  const [user] = await ctx.db
+    .insert(users)
+    .values({ email, name: `Member ${role}`, passwordHash: await bcrypt.hash('member-password', 4) })
+    .returning();
   await ctx.db.insert(memberships).values({ teamId, userId: user.id, role });
   return { userId: user.id, agent: await signedInAgent(ctx, email, 'member-password') };
 }

@@ -25,7 +25,11 @@ export function printTable(sections: { name: string; rows: Row[] }[]): void {
     for (const r of s.rows) lines.push([s.name, r.metric, format(r.ours), format(r.reference), ratio(r), r.unit, r.note ?? '']);
   }
   const widths = header.map((_, c) => Math.max(...lines.map((l) => l[c].length)));
-  const render = (l: string[]): string => l.map((cell, c) => (c >= 2 && c <= 4 ? cell.padStart(widths[c]) : cell.padEnd(widths[c]))).join('  ').trimEnd();
+  const render = (l: string[]): string =>
+    l
+      .map((cell, c) => (c >= 2 && c <= 4 ? cell.padStart(widths[c]) : cell.padEnd(widths[c])))
+      .join('  ')
+      .trimEnd();
   console.log(render(lines[0]));
   console.log(widths.map((w) => '-'.repeat(w)).join('  '));
   for (const l of lines.slice(1)) console.log(render(l));

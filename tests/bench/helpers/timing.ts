@@ -1,5 +1,8 @@
 /** Median wall time (ms) of `repeat` runs after `warmup` unmeasured runs; the last result is returned too. */
-export function timeMedian<T>(fn: () => T, { repeat = 5, warmup = 1 }: { repeat?: number; warmup?: number } = {}): { ms: number; result: T } {
+export function timeMedian<T>(
+  fn: () => T,
+  { repeat = 5, warmup = 1 }: { repeat?: number; warmup?: number } = {},
+): { ms: number; result: T } {
   let result = undefined as T;
   for (let i = 0; i < warmup; i++) result = fn();
   const times: number[] = [];

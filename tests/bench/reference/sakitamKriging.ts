@@ -45,7 +45,12 @@ type LibraryVariogram = ReturnType<typeof kriging.train>;
 
 /** Builds the library's variogram object for fixed parameters, as the last part of its `train` does. */
 export function trainWithParameters(t: number[], x: number[], y: number[], p: SakitamParameters): LibraryVariogram {
-  const model = p.model === 'gaussian' ? kriging.variogramGaussian : p.model === 'spherical' ? kriging.variogramSpherical : kriging.variogramExponential;
+  const model =
+    p.model === 'gaussian'
+      ? kriging.variogramGaussian
+      : p.model === 'spherical'
+        ? kriging.variogramSpherical
+        : kriging.variogramExponential;
   const A = 1 / 3;
   const n = x.length;
   const K: number[] = new Array(n * n);

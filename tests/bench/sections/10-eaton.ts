@@ -32,7 +32,9 @@ export const section: BenchSection = {
       observedSlowness[i] = normalSlowness[i] * (1 + 0.15 * Math.max(0, Math.sin(depthM / 700)));
     }
     const fn = eatonSonic;
-    const ours = timeMedian(() => fn({ overburdenPa, normalPa, normalSlowness, observedSlowness, exponent: 3 }) as Float64Array, { repeat: 7 });
+    const ours = timeMedian(() => fn({ overburdenPa, normalPa, normalSlowness, observedSlowness, exponent: 3 }) as Float64Array, {
+      repeat: 7,
+    });
     const plain = timeMedian(
       () => {
         const out = new Float64Array(SAMPLES);
@@ -47,7 +49,13 @@ export const section: BenchSection = {
     let maxDiff = 0;
     for (let i = 0; i < SAMPLES; i++) maxDiff = Math.max(maxDiff, Math.abs(ours.result[i] - plain.result[i]));
     return [
-      { metric: `eatonSonic, ${SAMPLES.toLocaleString('en')} samples`, ours: ours.ms, reference: plain.ms, unit: 'ms', note: 'reference: bare loop of the formula' },
+      {
+        metric: `eatonSonic, ${SAMPLES.toLocaleString('en')} samples`,
+        ours: ours.ms,
+        reference: plain.ms,
+        unit: 'ms',
+        note: 'reference: bare loop of the formula',
+      },
       { metric: 'max |ΔP| vs bare loop', ours: maxDiff, unit: 'Pa' },
     ];
   },

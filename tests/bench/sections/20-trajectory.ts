@@ -29,8 +29,10 @@ function textbook(s: StationInput[]): { tvdM: number; northM: number; eastM: num
   const out = [{ tvdM: 0, northM: 0, eastM: 0 }];
   // the first station is at MD 0 on the default tie-in, so it sits at the origin
   for (let i = 1; i < s.length; i++) {
-    const i1 = s[i - 1].incDeg * DEG, i2 = s[i].incDeg * DEG;
-    const a1 = s[i - 1].aziDeg * DEG, a2 = s[i].aziDeg * DEG;
+    const i1 = s[i - 1].incDeg * DEG,
+      i2 = s[i].incDeg * DEG;
+    const a1 = s[i - 1].aziDeg * DEG,
+      a2 = s[i].aziDeg * DEG;
     const cosB = Math.cos(i2 - i1) - Math.sin(i1) * Math.sin(i2) * (1 - Math.cos(a2 - a1));
     const beta = Math.acos(Math.min(1, Math.max(-1, cosB)));
     const rf = beta === 0 ? 1 : (2 / beta) * Math.tan(beta / 2);
@@ -74,11 +76,34 @@ export const section: BenchSection = {
     const fromStations = timeMedian(() => tvdAt(survey, sorted), { repeat: 5 });
 
     return [
-      { metric: `minimumCurvature, ${STATIONS.toLocaleString('en')} stations → objects`, ours: objects.ms, reference: reference.ms, unit: 'ms', note: 'reference: textbook acos loop' },
-      { metric: 'computeSurvey (typed arrays)', ours: typed.ms, reference: reference.ms, unit: 'ms', note: 'reference: textbook acos loop' },
+      {
+        metric: `minimumCurvature, ${STATIONS.toLocaleString('en')} stations → objects`,
+        ours: objects.ms,
+        reference: reference.ms,
+        unit: 'ms',
+        note: 'reference: textbook acos loop',
+      },
+      {
+        metric: 'computeSurvey (typed arrays)',
+        ours: typed.ms,
+        reference: reference.ms,
+        unit: 'ms',
+        note: 'reference: textbook acos loop',
+      },
       { metric: 'max |Δposition| vs textbook', ours: maxDiff, unit: 'm', note: 'acos loses digits on tiny doglegs' },
-      { metric: `tvdAt ${LOOKUPS.toLocaleString('en')} sorted MDs (survey given)`, ours: lookSorted.ms, reference: lookShuffled.ms, unit: 'ms', note: 'reference: same MDs shuffled (bisection)' },
-      { metric: `tvdAt ${LOOKUPS.toLocaleString('en')} sorted MDs from stations`, ours: fromStations.ms, unit: 'ms', note: 'includes computeSurvey' },
+      {
+        metric: `tvdAt ${LOOKUPS.toLocaleString('en')} sorted MDs (survey given)`,
+        ours: lookSorted.ms,
+        reference: lookShuffled.ms,
+        unit: 'ms',
+        note: 'reference: same MDs shuffled (bisection)',
+      },
+      {
+        metric: `tvdAt ${LOOKUPS.toLocaleString('en')} sorted MDs from stations`,
+        ours: fromStations.ms,
+        unit: 'ms',
+        note: 'includes computeSurvey',
+      },
     ];
   },
 };

@@ -3,7 +3,14 @@
  * @sakitam-gis/kriging on the same data and the same variogram (see ../reference/sakitamKriging.ts for how the
  * variogram is handed to it and what it computes).
  */
-import { experimentalVariogram, fitVariogram, grid, ordinaryKriging, type Target, type Variogram } from '../../../shared/interpolation/index';
+import {
+  experimentalVariogram,
+  fitVariogram,
+  grid,
+  ordinaryKriging,
+  type Target,
+  type Variogram,
+} from '../../../shared/interpolation/index';
 import { predictAll, semivariogramParameters, shiftedCovarianceParameters, trainWithParameters } from '../reference/sakitamKriging';
 import { syntheticWells } from '../helpers/random';
 import { timeMedian } from '../helpers/timing';
@@ -39,7 +46,10 @@ export const section: BenchSection = {
     const oursValues = Float64Array.from(ours.result, (r) => r.value);
 
     // the reference as it is meant to be used: its semivariogram Gram matrix over all wells, estimate only
-    const ref = timeMedian(() => predictAll(trainWithParameters(t, x, y, semivariogramParameters(variogram)), targets), { repeat: 1, warmup: 0 });
+    const ref = timeMedian(() => predictAll(trainWithParameters(t, x, y, semivariogramParameters(variogram)), targets), {
+      repeat: 1,
+      warmup: 0,
+    });
 
     const allPoints = timeMedian(() => ordinaryKriging(wells, variogram, subset), { repeat: 1, warmup: 0 });
     const allValues = Float64Array.from(allPoints.result, (r) => r.value);
@@ -62,13 +72,45 @@ export const section: BenchSection = {
     const fitted = `exponential fit: nugget ${variogram.nugget.toFixed(0)}, sill ${variogram.sill.toFixed(0)}, range ${variogram.range.toFixed(0)} m`;
     const cells = `${g.nx}×${g.ny}`;
     return [
-      { metric: `OK ${WELLS} wells → ${cells}, ${NEIGHBOURS} neighbours, with variance`, ours: ours.ms, reference: ref.ms, unit: 'ms', note: 'reference: all wells, estimate only; ' + fitted },
-      { metric: `  … reference estimate + its variance (scaled from ${fewCells.length} cells)`, ours: ours.ms, reference: ref.ms + refVarianceGridMs, unit: 'ms', note: 'like for like: both give value and variance' },
-      { metric: 'max |Δestimate|: ours (16) vs reference', ours: maxAbsDiff(oursValues, ref.result), unit: 'value', note: 'reference predicts k₀ᵀΓ⁻¹t with no Σw = 1 constraint' },
+      {
+        metric: `OK ${WELLS} wells → ${cells}, ${NEIGHBOURS} neighbours, with variance`,
+        ours: ours.ms,
+        reference: ref.ms,
+        unit: 'ms',
+        note: 'reference: all wells, estimate only; ' + fitted,
+      },
+      {
+        metric: `  … reference estimate + its variance (scaled from ${fewCells.length} cells)`,
+        ours: ours.ms,
+        reference: ref.ms + refVarianceGridMs,
+        unit: 'ms',
+        note: 'like for like: both give value and variance',
+      },
+      {
+        metric: 'max |Δestimate|: ours (16) vs reference',
+        ours: maxAbsDiff(oursValues, ref.result),
+        unit: 'value',
+        note: 'reference predicts k₀ᵀΓ⁻¹t with no Σw = 1 constraint',
+      },
       { metric: `ours all wells, ${subset.length} cells (every ${SUBSET_STEP}th)`, ours: allPoints.ms, unit: 'ms' },
-      { metric: '  max |Δestimate|: ours all vs reference', ours: maxAbsDiff(allValues, refOnSubset), unit: 'value', note: 'same neighbourhood; left: formulation only' },
-      { metric: '  max |Δestimate|: ours all vs reference, C+L form', ours: maxAbsDiff(allValues, shifted), unit: 'value', note: 'reference fed C(h)+L (L = 1e4, 2e4 × C(0), Richardson): tends to OK' },
-      { metric: '  max |Δestimate|: ours 16 vs ours all', ours: maxAbsDiff(oursOnSubset, allValues), unit: 'value', note: 'effect of the neighbour limit' },
+      {
+        metric: '  max |Δestimate|: ours all vs reference',
+        ours: maxAbsDiff(allValues, refOnSubset),
+        unit: 'value',
+        note: 'same neighbourhood; left: formulation only',
+      },
+      {
+        metric: '  max |Δestimate|: ours all vs reference, C+L form',
+        ours: maxAbsDiff(allValues, shifted),
+        unit: 'value',
+        note: 'reference fed C(h)+L (L = 1e4, 2e4 × C(0), Richardson): tends to OK',
+      },
+      {
+        metric: '  max |Δestimate|: ours 16 vs ours all',
+        ours: maxAbsDiff(oursOnSubset, allValues),
+        unit: 'value',
+        note: 'effect of the neighbour limit',
+      },
       { metric: '  min kriging variance on the grid', ours: minVariance, unit: 'value²', note: 'must be ≥ 0' },
     ];
   },

@@ -19,31 +19,44 @@ export const section: BenchSection = {
     const { teams, users } = await import('../../../server/db/schema');
     const { runImport } = await import('../../../server/features/imports/imports.service');
     const db = createDb(process.env.DATABASE_URL, 2);
-    const [team] = await db.insert(teams).values({ name: `bench ${randomUUID()}` }).returning();
-    const [user] = await db.insert(users).values({ email: `bench-${randomUUID()}@porelith.example`, name: 'bench' }).returning();
+    const [team] = await db
+      .insert(teams)
+      .values({ name: `bench ${randomUUID()}` })
+      .returning();
+    const [user] = await db
+      .insert(users)
+      .values({ email: `bench-${randomUUID()}@porelith.example`, name: 'bench' })
+      .returning();
     const base = { teamId: team.id, userId: user.id, epsg: 4326, dryRun: false, skipInvalid: false };
     try {
       const header = ['name,uwi,lon,lat,water depth (m),td md (m)'];
-      for (let i = 0; i < WELLS; i++) header.push(`BW-${i},BU-${i},${(-101 + (i % 100) * 0.01).toFixed(4)},${(-32 - Math.floor(i / 100) * 0.005).toFixed(4)},${100 + (i % 50)},${3000 + (i % 900)}`);
+      for (let i = 0; i < WELLS; i++)
+        header.push(
+          `BW-${i},BU-${i},${(-101 + (i % 100) * 0.01).toFixed(4)},${(-32 - Math.floor(i / 100) * 0.005).toFixed(4)},${100 + (i % 50)},${3000 + (i % 900)}`,
+        );
       const wellsCsv = Buffer.from(header.join('\n'));
       const t0 = performance.now();
       const w = await runImport(db, { ...base, kind: 'wells', fileName: 'bench-wells.csv', bytes: wellsCsv });
       const wellsMs = performance.now() - t0;
 
       const survey = ['well,md (m),inc,azi'];
-      for (let i = 0; i < WELLS; i++) for (let k = 0; k < STATIONS_PER_WELL; k++) survey.push(`BW-${i},${k * 150},${Math.min(40, k * 3)},${(i * 7) % 360}`);
+      for (let i = 0; i < WELLS; i++)
+        for (let k = 0; k < STATIONS_PER_WELL; k++) survey.push(`BW-${i},${k * 150},${Math.min(40, k * 3)},${(i * 7) % 360}`);
       const t1 = performance.now();
       await runImport(db, { ...base, kind: 'surveys', fileName: 'bench-survey.csv', bytes: Buffer.from(survey.join('\n')) });
       const surveyMs = performance.now() - t1;
 
       const pressures = ['well,kind,md (m),value,unit,quality'];
-      for (let i = 0; i < PRESSURES; i++) pressures.push(`BW-${i % WELLS},formation_test,${1000 + (i % 20) * 100},${(1500 + (i % 20) * 150).toFixed(1)},psi,good`);
+      for (let i = 0; i < PRESSURES; i++)
+        pressures.push(`BW-${i % WELLS},formation_test,${1000 + (i % 20) * 100},${(1500 + (i % 20) * 150).toFixed(1)},psi,good`);
       const t2 = performance.now();
       await runImport(db, { ...base, kind: 'pressures', fileName: 'bench-pressures.csv', bytes: Buffer.from(pressures.join('\n')) });
       const pressureMs = performance.now() - t2;
 
       // The floor: the same number of pressure rows inserted by PostgreSQL from arrays, no parsing or checks.
-      const ids = (await db.execute<{ id: string }>(sql`SELECT id FROM wells WHERE team_id = ${team.id} ORDER BY name`)).rows.map((r) => r.id);
+      const ids = (await db.execute<{ id: string }>(sql`SELECT id FROM wells WHERE team_id = ${team.id} ORDER BY name`)).rows.map(
+        (r) => r.id,
+      );
       const wellIds = Array.from({ length: PRESSURES }, (_, i) => ids[i % ids.length]);
       const md = Array.from({ length: PRESSURES }, (_, i) => 1000 + (i % 20) * 100);
       const t3 = performance.now();
@@ -54,9 +67,23 @@ export const section: BenchSection = {
       );
       const rawMs = performance.now() - t3;
       return [
-        { metric: `${WELLS.toLocaleString('en')} well headers (${(w as { outcome?: { created: number } }).outcome?.created ?? 0} created)`, ours: wellsMs, unit: 'ms' },
-        { metric: `${(WELLS * STATIONS_PER_WELL).toLocaleString('en')} survey stations with minimum curvature`, ours: surveyMs, unit: 'ms' },
-        { metric: `${PRESSURES.toLocaleString('en')} pressure rows`, ours: pressureMs, reference: rawMs, unit: 'ms', note: 'pg INSERT … unnest of the same rows, no parsing' },
+        {
+          metric: `${WELLS.toLocaleString('en')} well headers (${(w as { outcome?: { created: number } }).outcome?.created ?? 0} created)`,
+          ours: wellsMs,
+          unit: 'ms',
+        },
+        {
+          metric: `${(WELLS * STATIONS_PER_WELL).toLocaleString('en')} survey stations with minimum curvature`,
+          ours: surveyMs,
+          unit: 'ms',
+        },
+        {
+          metric: `${PRESSURES.toLocaleString('en')} pressure rows`,
+          ours: pressureMs,
+          reference: rawMs,
+          unit: 'ms',
+          note: 'pg INSERT … unnest of the same rows, no parsing',
+        },
       ];
     } finally {
       await db.execute(sql`DELETE FROM wells WHERE team_id = ${team.id}`);

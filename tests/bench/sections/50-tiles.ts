@@ -34,25 +34,49 @@ export const section: BenchSection = {
     const { teamTileQuery } = await import('../../../server/features/tiles/teamTiles.service');
     const db = createDb(process.env.DATABASE_URL, 4);
     const env = parseEnv({ ...process.env, LOG_LEVEL: 'silent', SIGNIN_RATE_MAX: '1000' });
-    const [team] = await db.insert(teams).values({ name: `tile bench ${randomUUID()}` }).returning();
+    const [team] = await db
+      .insert(teams)
+      .values({ name: `tile bench ${randomUUID()}` })
+      .returning();
     const email = `tile-bench-${randomUUID()}@porelith.example`;
-    const [user] = await db.insert(users).values({ email, name: 'bench', passwordHash: await bcrypt.hash('bench-password', 4) }).returning();
+    const [user] = await db
+      .insert(users)
+      .values({ email, name: 'bench', passwordHash: await bcrypt.hash('bench-password', 4) })
+      .returning();
     await db.insert(memberships).values({ teamId: team.id, userId: user.id, role: 'planner' });
-    const server = createApp({ db, env, mailer: { send: async () => {}, close: () => {} }, serveClient: false, tileCache: false }).listen(0, '127.0.0.1');
+    const server = createApp({ db, env, mailer: { send: async () => {}, close: () => {} }, serveClient: false, tileCache: false }).listen(
+      0,
+      '127.0.0.1',
+    );
     await new Promise<void>((r) => server.once('listening', () => r()));
     const origin = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
     try {
       // Wells scattered over ~8° × 8° around the demo basin, seeded so every run sees the same data.
       let seed = 7;
-      const rand = () => ((seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31);
+      const rand = () => (seed = (seed * 1103515245 + 12345) % 2 ** 31) / 2 ** 31;
       const rows = Array.from({ length: WELLS }, (_, i) => {
         const lon = -105 + rand() * 8;
         const lat = -36 + rand() * 8;
         return [team.id, `BW-${i}`, `SRID=4326;POINT(${lon} ${lat})`, lon, lat];
       });
-      await bulkInsert(db, 'wells', [['team_id', 'uuid'], ['name', 'text'], ['location', 'text', '$value::geometry'], ['surface_x', 'float8'], ['surface_y', 'float8']], rows);
+      await bulkInsert(
+        db,
+        'wells',
+        [
+          ['team_id', 'uuid'],
+          ['name', 'text'],
+          ['location', 'text', '$value::geometry'],
+          ['surface_x', 'float8'],
+          ['surface_y', 'float8'],
+        ],
+        rows,
+      );
       await db.execute(sql`ANALYZE wells`);
-      const signIn = await fetch(`${origin}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password: 'bench-password' }) });
+      const signIn = await fetch(`${origin}/api/auth/sign-in`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ email, password: 'bench-password' }),
+      });
       const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0];
       const out: Row[] = [];
       for (const z of [4, 8, 12]) {
@@ -74,19 +98,32 @@ export const section: BenchSection = {
         }
         const e = stats(endpoint);
         const r = stats(raw);
-        out.push({ metric: `wells tile z${z} median (${(bytes / 1024).toFixed(0)} KiB)`, ours: e.median, reference: r.median, unit: 'ms', note: 'ST_AsMVT query alone through pg' });
+        out.push({
+          metric: `wells tile z${z} median (${(bytes / 1024).toFixed(0)} KiB)`,
+          ours: e.median,
+          reference: r.median,
+          unit: 'ms',
+          note: 'ST_AsMVT query alone through pg',
+        });
         out.push({ metric: `wells tile z${z} p95`, ours: e.p95, reference: r.p95, unit: 'ms', note: 'ST_AsMVT query alone through pg' });
       }
       const pw = await fetch(`${origin}/api/teams/${team.id}/planned-wells`, {
         method: 'POST',
         headers: { 'content-type': 'application/json', cookie },
-        body: JSON.stringify({ name: 'bench planned', location: { type: 'Point', coordinates: [-101, -32.5] }, plannedTdM: 4000, waterDepthM: 100 }),
+        body: JSON.stringify({
+          name: 'bench planned',
+          location: { type: 'Point', coordinates: [-101, -32.5] },
+          plannedTdM: 4000,
+          waterDepthM: 100,
+        }),
       }).then((r) => r.json() as Promise<{ id: string }>);
       const search: number[] = [];
       let found = 0;
       for (let i = 0; i < 5; i++) {
         const t0 = performance.now();
-        const res = await fetch(`${origin}/api/teams/${team.id}/planned-wells/${pw.id}/offset-candidates?radiusKm=25`, { headers: { cookie } });
+        const res = await fetch(`${origin}/api/teams/${team.id}/planned-wells/${pw.id}/offset-candidates?radiusKm=25`, {
+          headers: { cookie },
+        });
         found = ((await res.json()) as unknown[]).length;
         search.push(performance.now() - t0);
       }

@@ -111,7 +111,14 @@ describe('top of overpressure', () => {
   it('for directional wells it finds the top where the bore meets the surface', () => {
     for (const w of basin.wells.filter((x) => x.profile !== 'vertical')) {
       const c = w.truth.column;
-      const top = topOfOverpressure({ tvdM: c.tvdM, porePa: c.porePa, normalGradientPaM: 1030 * g, marginPaM: 0, minThicknessM: 20, datumOffsetM: w.airGapM });
+      const top = topOfOverpressure({
+        tvdM: c.tvdM,
+        porePa: c.porePa,
+        normalGradientPaM: 1030 * g,
+        marginPaM: 0,
+        minThicknessM: 20,
+        datumOffsetM: w.airGapM,
+      });
       expect(top).not.toBeNull();
       expect(Math.abs(top!.tvdM - w.airGapM - w.truth.topTvdssM)).toBeLessThanOrEqual(DEMO_PHYSICS.stepM);
     }
@@ -155,7 +162,7 @@ describe('overburden and compaction', () => {
       const c = w.truth.column;
       const i = Math.round(c.mudlineTvdM + 1000);
       if (c.tvdM[i] > c.topTvdM) continue;
-      const phi = 0.63 * Math.exp(-0.51 * (c.tvdM[i] - c.mudlineTvdM) / 1000);
+      const phi = 0.63 * Math.exp((-0.51 * (c.tvdM[i] - c.mudlineTvdM)) / 1000);
       expect(c.porosity[i]).toBeCloseTo(phi, 12);
       expect(c.densityKgM3[i]).toBeCloseTo(phi * 1030 + (1 - phi) * 2720, 8);
     }
@@ -168,7 +175,7 @@ describe('overburden and compaction', () => {
       const i = Math.round(c.topTvdM + 500);
       if (i >= c.tvdM.length) continue;
       checked++;
-      const normalPhi = 0.63 * Math.exp(-0.51 * (c.tvdM[i] - c.mudlineTvdM) / 1000);
+      const normalPhi = 0.63 * Math.exp((-0.51 * (c.tvdM[i] - c.mudlineTvdM)) / 1000);
       expect(c.porosity[i]).toBeGreaterThan(normalPhi * 1.05);
       // Porosity never falls below where it stood at the top by more than a little: the rock stopped compacting.
       const atTop = c.porosity[Math.round(c.topTvdM)];

@@ -1,6 +1,13 @@
 import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
-import { covariance, experimentalVariogram, fitVariogram, variogramValue, type Variogram, type VariogramLag } from '@shared/interpolation/index';
+import {
+  covariance,
+  experimentalVariogram,
+  fitVariogram,
+  variogramValue,
+  type Variogram,
+  type VariogramLag,
+} from '@shared/interpolation/index';
 import { seededRandom } from '../../bench/helpers/random';
 
 function exactLags(v: Variogram, hs: number[]): VariogramLag[] {
@@ -40,14 +47,18 @@ describe('fitVariogram', () => {
     const n = 300;
     const sites = Array.from({ length: n }, () => ({ x: random() * 200, y: random() * 200 }));
     const C = new Matrix(n, n);
-    for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) C.set(i, j, covariance(truth, Math.hypot(sites[i].x - sites[j].x, sites[i].y - sites[j].y)));
+    for (let i = 0; i < n; i++)
+      for (let j = 0; j < n; j++) C.set(i, j, covariance(truth, Math.hypot(sites[i].x - sites[j].x, sites[i].y - sites[j].y)));
     const L = new CholeskyDecomposition(C).lowerTriangularMatrix;
     const gaussian = (): number => Math.sqrt(-2 * Math.log(1 - random())) * Math.cos(2 * Math.PI * random()); // Box & Muller 1958
     const pooled = new Map<number, { h: number; g: number; n: number }>();
     for (let r = 0; r < 12; r++) {
       const eps = Matrix.columnVector(Array.from({ length: n }, gaussian));
       const z = L.mmul(eps).getColumn(0);
-      const lags = experimentalVariogram(sites.map((s, i) => ({ ...s, value: z[i] })), { lags: 12, lagWidth: 10 });
+      const lags = experimentalVariogram(
+        sites.map((s, i) => ({ ...s, value: z[i] })),
+        { lags: 12, lagWidth: 10 },
+      );
       lags.forEach((l, k) => {
         const p = pooled.get(k) ?? { h: 0, g: 0, n: 0 };
         pooled.set(k, { h: p.h + l.lagM * l.pairs, g: p.g + l.gamma * l.pairs, n: p.n + l.pairs });
@@ -64,9 +75,18 @@ describe('fitVariogram', () => {
     const lags = exactLags({ model: 'spherical', nugget: 0, sill: 1, range: 30 }, [5, 10, 20]);
     expect(() => fitVariogram(lags, { model: 'linear' as never })).toThrow('Unknown variogram model: linear');
     expect(() => fitVariogram(lags.slice(0, 2), { model: 'spherical' })).toThrow('fitVariogram needs at least 3 lag bins, got 2');
-    expect(() => fitVariogram(lags.slice(0, 1), { model: 'spherical', nugget: 0 })).toThrow('fitVariogram needs at least 2 lag bins, got 1');
+    expect(() => fitVariogram(lags.slice(0, 1), { model: 'spherical', nugget: 0 })).toThrow(
+      'fitVariogram needs at least 2 lag bins, got 1',
+    );
     expect(() => fitVariogram(lags, { model: 'spherical', nugget: -1 })).toThrow('nugget must be a finite number ≥ 0, got -1');
-    expect(() => fitVariogram([...lags, { lagM: 4, gamma: Number.NaN, pairs: 3 }], { model: 'spherical' })).toThrow('Lag 3: gamma must be a finite number ≥ 0, got NaN');
-    expect(() => fitVariogram(lags.map((l) => ({ ...l, gamma: 0 })), { model: 'spherical' })).toThrow('fitVariogram: every semivariance is zero, so there is nothing to fit');
+    expect(() => fitVariogram([...lags, { lagM: 4, gamma: Number.NaN, pairs: 3 }], { model: 'spherical' })).toThrow(
+      'Lag 3: gamma must be a finite number ≥ 0, got NaN',
+    );
+    expect(() =>
+      fitVariogram(
+        lags.map((l) => ({ ...l, gamma: 0 })),
+        { model: 'spherical' },
+      ),
+    ).toThrow('fitVariogram: every semivariance is zero, so there is nothing to fit');
   });
 });

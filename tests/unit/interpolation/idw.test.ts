@@ -17,7 +17,10 @@ describe('idw against @turf/turf interpolate', () => {
     const pts = featureCollection(data.map((d) => point([d.lon, d.lat], { value: d.value })));
     const result = interpolate(pts, 0.15, { gridType: 'point', property: 'value', units: 'kilometers', weight: 2 });
     const planar = data.map((d) => ({ x: EARTH_RADIUS_M * d.lon * DEG, y: EARTH_RADIUS_M * d.lat * DEG, value: d.value }));
-    const targets = result.features.map((f) => ({ x: EARTH_RADIUS_M * f.geometry.coordinates[0] * DEG, y: EARTH_RADIUS_M * f.geometry.coordinates[1] * DEG }));
+    const targets = result.features.map((f) => ({
+      x: EARTH_RADIUS_M * f.geometry.coordinates[0] * DEG,
+      y: EARTH_RADIUS_M * f.geometry.coordinates[1] * DEG,
+    }));
     expect(targets.length).toBeGreaterThan(20);
 
     let worstDistance = 0;
@@ -37,11 +40,23 @@ describe('idw against @turf/turf interpolate', () => {
 
 describe('idw', () => {
   it('is the hand-computed Shepard (1968) weighted mean, and exact at data points', () => {
-    const pts = [{ x: 0, y: 0, value: 10 }, { x: 4, y: 0, value: 20 }, { x: 0, y: 3, value: 40 }];
+    const pts = [
+      { x: 0, y: 0, value: 10 },
+      { x: 4, y: 0, value: 20 },
+      { x: 0, y: 3, value: 40 },
+    ];
     // at (0, 1): d = 1, √17, 2 → p = 2 weights 1, 1/17, 1/4
     const w = [1, 1 / 17, 1 / 4];
     const expected = (10 * w[0] + 20 * w[1] + 40 * w[2]) / (w[0] + w[1] + w[2]);
-    const [a, b, c] = idw(pts, [{ x: 0, y: 1 }, { x: 4, y: 0 }, { x: 0, y: 1 }], { power: 2 });
+    const [a, b, c] = idw(
+      pts,
+      [
+        { x: 0, y: 1 },
+        { x: 4, y: 0 },
+        { x: 0, y: 1 },
+      ],
+      { power: 2 },
+    );
     expect(a).toBeCloseTo(expected, 12);
     expect(b).toBe(20);
     // p = 1 weights 1, 1/√17, 1/2
@@ -56,7 +71,10 @@ describe('idw', () => {
     const targets = Array.from({ length: 50 }, () => ({ x: random() * 120 - 10, y: random() * 120 - 10 }));
     const ours = idw(pts, targets, { power: 3, maxNeighbours: 7 });
     targets.forEach((t, i) => {
-      const near = pts.map((p) => ({ p, d: Math.hypot(p.x - t.x, p.y - t.y) })).sort((a, b) => a.d - b.d).slice(0, 7);
+      const near = pts
+        .map((p) => ({ p, d: Math.hypot(p.x - t.x, p.y - t.y) }))
+        .sort((a, b) => a.d - b.d)
+        .slice(0, 7);
       const sw = near.reduce((s, e) => s + e.d ** -3, 0);
       expect(ours[i]).toBeCloseTo(near.reduce((s, e) => s + e.p.value * e.d ** -3, 0) / sw, 10);
     });

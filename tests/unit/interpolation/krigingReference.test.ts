@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { ordinaryKriging, type Variogram } from '@shared/interpolation/index';
-import { predictAll, semivariogramParameters, shiftedCovarianceParameters, trainWithParameters } from '../../bench/reference/sakitamKriging';
+import {
+  predictAll,
+  semivariogramParameters,
+  shiftedCovarianceParameters,
+  trainWithParameters,
+} from '../../bench/reference/sakitamKriging';
 import { seededRandom } from '../../bench/helpers/random';
 import { ISAAKS_SRIVASTAVA_POINTS } from './fixtures';
 

@@ -8,7 +8,11 @@ import { ISAAKS_SRIVASTAVA_POINTS, ISAAKS_SRIVASTAVA_TARGET, ISAAKS_SRIVASTAVA_V
  * Independent reference: the ordinary-kriging system [C 1; 1ᵀ 0]·[w; μ] = [c0; 1] solved by ml-matrix,
  * variance = C(0) − Σ w·c0 − μ (Isaaks & Srivastava 1989, ch. 12).
  */
-function mlMatrixKriging(points: readonly DataPoint[], v: Variogram, target: Target): { value: number; variance: number; weights: number[]; mu: number } {
+function mlMatrixKriging(
+  points: readonly DataPoint[],
+  v: Variogram,
+  target: Target,
+): { value: number; variance: number; weights: number[]; mu: number } {
   const n = points.length;
   const A = new Matrix(n + 1, n + 1);
   const b = new Matrix(n + 1, 1);
@@ -37,7 +41,9 @@ function randomPoints(n: number, seed: number, size = 1000): DataPoint[] {
 }
 
 describe('ordinaryKriging: Isaaks & Srivastava (1989) ch. 12 worked example', () => {
-  const [result] = ordinaryKriging(ISAAKS_SRIVASTAVA_POINTS, ISAAKS_SRIVASTAVA_VARIOGRAM, [ISAAKS_SRIVASTAVA_TARGET], { returnWeights: true });
+  const [result] = ordinaryKriging(ISAAKS_SRIVASTAVA_POINTS, ISAAKS_SRIVASTAVA_VARIOGRAM, [ISAAKS_SRIVASTAVA_TARGET], {
+    returnWeights: true,
+  });
 
   it('gives the published estimate, weights and variance', () => {
     // Isaaks & Srivastava 1989, ch. 12: estimate 592.7 ppm, ordinary-kriging variance 8.96 ppm², weights
@@ -90,7 +96,11 @@ describe('ordinaryKriging against ml-matrix on random data', () => {
         .map((p, i) => ({ p, i, d: Math.hypot(p.x - targets[t].x, p.y - targets[t].y) }))
         .sort((a, b) => a.d - b.d)
         .slice(0, 16);
-      const ref = mlMatrixKriging(nearest.map((e) => e.p), v, targets[t]);
+      const ref = mlMatrixKriging(
+        nearest.map((e) => e.p),
+        v,
+        targets[t],
+      );
       expect(r.weights!.map((w) => w.index).sort((a, b) => a - b)).toEqual(nearest.map((e) => e.i).sort((a, b) => a - b));
       expect(r.value).toBeCloseTo(ref.value, 7);
       expect(r.variance).toBeCloseTo(ref.variance, 7);
@@ -111,7 +121,9 @@ describe('ordinaryKriging against ml-matrix on random data', () => {
 
   it('tends to the plain mean with a pure nugget model far from the data', () => {
     // pure nugget: every datum is uncorrelated, so OK weights are all 1/n (Isaaks & Srivastava 1989, ch. 12)
-    const r = ordinaryKriging(points, { model: 'spherical', nugget: 3, sill: 0, range: 1 }, [{ x: 500.5, y: 500.5 }], { returnWeights: true })[0];
+    const r = ordinaryKriging(points, { model: 'spherical', nugget: 3, sill: 0, range: 1 }, [{ x: 500.5, y: 500.5 }], {
+      returnWeights: true,
+    })[0];
     const mean = points.reduce((s, p) => s + p.value, 0) / points.length;
     expect(r.value).toBeCloseTo(mean, 10);
     r.weights!.forEach((w) => expect(w.weight).toBeCloseTo(1 / points.length, 12));
@@ -121,13 +133,20 @@ describe('ordinaryKriging against ml-matrix on random data', () => {
 
 describe('ordinaryKriging input checks', () => {
   const v: Variogram = { model: 'exponential', nugget: 0, sill: 1, range: 10 };
-  const pts = [{ x: 0, y: 0, value: 1 }, { x: 5, y: 0, value: 2 }];
+  const pts = [
+    { x: 0, y: 0, value: 1 },
+    { x: 5, y: 0, value: 2 },
+  ];
   it('rejects duplicates, too few points, bad targets and options', () => {
     expect(() => ordinaryKriging([...pts, { x: 5, y: 0, value: 7 }], v, [{ x: 1, y: 1 }])).toThrow('Duplicate location at (5, 0)');
     expect(() => ordinaryKriging([pts[0]], v, [{ x: 1, y: 1 }])).toThrow('Ordinary kriging needs at least 2 points, got 1');
     expect(() => ordinaryKriging(pts, v, [{ x: 1, y: Number.NaN }])).toThrow('Target 0: x and y must be finite numbers');
     expect(() => ordinaryKriging(pts, v, [{ x: 1, y: 1 }], { maxNeighbours: 0 })).toThrow('maxNeighbours must be an integer ≥ 1, got 0');
-    expect(() => ordinaryKriging(pts, { ...v, range: Number.NaN }, [{ x: 1, y: 1 }])).toThrow('variogram.range must be a finite number, got NaN');
-    expect(() => ordinaryKriging([{ x: 0, y: 0, value: Number.POSITIVE_INFINITY }, pts[1]], v, [])).toThrow('Point 0: value must be a finite number, got Infinity');
+    expect(() => ordinaryKriging(pts, { ...v, range: Number.NaN }, [{ x: 1, y: 1 }])).toThrow(
+      'variogram.range must be a finite number, got NaN',
+    );
+    expect(() => ordinaryKriging([{ x: 0, y: 0, value: Number.POSITIVE_INFINITY }, pts[1]], v, [])).toThrow(
+      'Point 0: value must be a finite number, got Infinity',
+    );
   });
 });

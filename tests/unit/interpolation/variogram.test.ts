@@ -29,7 +29,9 @@ describe('variogram models (GSLIB convention, Deutsch & Journel 1998)', () => {
     expect(() => variogramValue({ model: 'cubic' as never, ...base }, 1)).toThrow('Unknown variogram model: cubic');
     expect(() => variogramValue({ model: 'spherical', ...base, range: 0 }, 1)).toThrow('variogram.range must be > 0, got 0');
     expect(() => variogramValue({ model: 'spherical', ...base, nugget: -1 }, 1)).toThrow('variogram.nugget must be ≥ 0, got -1');
-    expect(() => variogramValue({ model: 'spherical', nugget: 0, sill: 0, range: 5 }, 1)).toThrow('variogram total sill (nugget + sill) must be > 0');
+    expect(() => variogramValue({ model: 'spherical', nugget: 0, sill: 0, range: 5 }, 1)).toThrow(
+      'variogram total sill (nugget + sill) must be > 0',
+    );
     expect(() => covariance({ model: 'spherical', ...base }, -1)).toThrow('h must be a finite distance ≥ 0, got -1');
   });
 });
@@ -57,11 +59,20 @@ describe('experimentalVariogram', () => {
   });
 
   it('rejects bad options and points', () => {
-    const pts = [{ x: 0, y: 0, value: 1 }, { x: 1, y: 0, value: 2 }];
+    const pts = [
+      { x: 0, y: 0, value: 1 },
+      { x: 1, y: 0, value: 2 },
+    ];
     expect(() => experimentalVariogram(pts, { lags: 0, lagWidth: 1 })).toThrow('lags must be an integer ≥ 1, got 0');
     expect(() => experimentalVariogram(pts, { lags: 2, lagWidth: -1 })).toThrow('lagWidth must be a finite number > 0, got -1');
-    expect(() => experimentalVariogram([pts[0]], { lags: 2, lagWidth: 1 })).toThrow('An experimental variogram needs at least 2 points, got 1');
-    expect(() => experimentalVariogram([pts[0], { x: 0, y: 0, value: 5 }], { lags: 2, lagWidth: 1 })).toThrow('Duplicate location at (0, 0)');
-    expect(() => experimentalVariogram([pts[0], { x: 1, y: Number.NaN, value: 5 }], { lags: 2, lagWidth: 1 })).toThrow('Point 1: y must be a finite number, got NaN');
+    expect(() => experimentalVariogram([pts[0]], { lags: 2, lagWidth: 1 })).toThrow(
+      'An experimental variogram needs at least 2 points, got 1',
+    );
+    expect(() => experimentalVariogram([pts[0], { x: 0, y: 0, value: 5 }], { lags: 2, lagWidth: 1 })).toThrow(
+      'Duplicate location at (0, 0)',
+    );
+    expect(() => experimentalVariogram([pts[0], { x: 1, y: Number.NaN, value: 5 }], { lags: 2, lagWidth: 1 })).toThrow(
+      'Point 1: y must be a finite number, got NaN',
+    );
   });
 });

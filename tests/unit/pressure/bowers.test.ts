@@ -1,12 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import {
-  bowersLoading,
-  bowersUnloading,
-  bowersVelocityLoading,
-  bowersVelocityUnloading,
-  convert,
-} from '@shared/pressure';
+import { bowersLoading, bowersUnloading, bowersVelocityLoading, bowersVelocityUnloading, convert } from '@shared/pressure';
 
 // Illustrative coefficients in Bowers' published units (ft/s, psi); any calibration works for these checks.
 const coeffs = { A: 10, B: 0.75 };
@@ -70,17 +64,13 @@ describe('Bowers unloading curve', () => {
 
   it('inverts its forward velocity (property)', () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 0, max: 1, noNaN: true }),
-        fc.double({ min: 1, max: 8, noNaN: true }),
-        (fraction, U) => {
-          const sigma = psi(fraction * sigmaMaxPsi);
-          const overburden = psi(15_000);
-          const v = bowersVelocityUnloading(sigma, { ...unloading, U });
-          const pore = bowersUnloading({ overburdenPa: overburden, velocityMs: v, ...unloading, U });
-          return Math.abs(overburden - pore - sigma) <= 1e-6 * overburden;
-        },
-      ),
+      fc.property(fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 1, max: 8, noNaN: true }), (fraction, U) => {
+        const sigma = psi(fraction * sigmaMaxPsi);
+        const overburden = psi(15_000);
+        const v = bowersVelocityUnloading(sigma, { ...unloading, U });
+        const pore = bowersUnloading({ overburdenPa: overburden, velocityMs: v, ...unloading, U });
+        return Math.abs(overburden - pore - sigma) <= 1e-6 * overburden;
+      }),
     );
   });
 

@@ -1,12 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  athyPorosity,
-  bulkDensityFromPorosity,
-  compactionDensity,
-  convert,
-  gardnerDensity,
-  SHALE_COMPACTION,
-} from '@shared/pressure';
+import { athyPorosity, bulkDensityFromPorosity, compactionDensity, convert, gardnerDensity, SHALE_COMPACTION } from '@shared/pressure';
 
 describe('gardnerDensity', () => {
   it('gives 2.300 g/cc at 10,000 ft/s', () => {

@@ -1,11 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  convert,
-  fractureEaton,
-  fractureHubbertWillis,
-  fractureMatthewsKelly,
-  maxAllowableMudWeight,
-} from '@shared/pressure';
+import { convert, fractureEaton, fractureHubbertWillis, fractureMatthewsKelly, maxAllowableMudWeight } from '@shared/pressure';
 
 const PSI_FT_PER_PPG = 12 / 231; // 0.051948 psi/ft per ppg, exact from 1 US gal = 231 in³ (US customary definition)
 

@@ -16,7 +16,7 @@ describe('gibsonExcessRatio', () => {
   it('tends to the steady loading-rate profile T(1 − ζ²)/2 for small T', () => {
     // Small-T limit of Gibson's problem: c_v u_zz = −γ′m with u_z(0) = 0, u(h) = 0 → u/(γ′h) = T(1 − ζ²)/2.
     for (const zeta of [0, 0.3, 0.7]) {
-      expect(gibsonExcessRatio({ T: 1e-4, zeta }) / (1e-4 * (1 - zeta * zeta) / 2)).toBeCloseTo(1, 3);
+      expect(gibsonExcessRatio({ T: 1e-4, zeta }) / ((1e-4 * (1 - zeta * zeta)) / 2)).toBeCloseTo(1, 3);
     }
     expect(gibsonExcessRatio({ T: 0, zeta: 0.2 })).toBe(0); // hydrostatic before any load
   });
@@ -50,9 +50,7 @@ describe('gibsonExcessRatio', () => {
   it('rejects bad input with exact messages', () => {
     expect(() => gibsonExcessRatio({ T: -1, zeta: 0 })).toThrow(new Error('gibsonExcessRatio: T must be >= 0 (got -1)'));
     expect(() => gibsonExcessRatio({ T: 1, zeta: 1.5 })).toThrow(new Error('gibsonExcessRatio: zeta must be <= 1 (got 1.5)'));
-    expect(() => gibsonExcessRatio({ T: NaN, zeta: 0 })).toThrow(
-      new Error('gibsonExcessRatio: T must be a finite number (got NaN)'),
-    );
+    expect(() => gibsonExcessRatio({ T: NaN, zeta: 0 })).toThrow(new Error('gibsonExcessRatio: T must be a finite number (got NaN)'));
   });
 });
 

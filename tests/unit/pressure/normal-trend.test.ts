@@ -108,9 +108,9 @@ describe('fitNormalTrend errors', () => {
     expect(() => fitNormalTrend([1, 2], [1, 2, 3], { model: 'loglinear', fromM: 0, toM: 5 })).toThrow(
       new Error('fitNormalTrend: values has length 3 but depthM has length 2'),
     );
-    expect(() =>
-      fitNormalTrend([1, 2, 3], [1, 2, 3], { model: 'power' as 'loglinear', fromM: 0, toM: 5 }),
-    ).toThrow(new Error('fitNormalTrend: model must be "exponential" or "loglinear" (got "power")'));
+    expect(() => fitNormalTrend([1, 2, 3], [1, 2, 3], { model: 'power' as 'loglinear', fromM: 0, toM: 5 })).toThrow(
+      new Error('fitNormalTrend: model must be "exponential" or "loglinear" (got "power")'),
+    );
     expect(() => fitNormalTrend([2, 2, 2], [1, 2, 3], { model: 'exponential', fromM: 0, toM: 5 })).toThrow(
       new Error('fitNormalTrend: all points in range are at the same depth'),
     );

@@ -45,20 +45,18 @@ describe('topOfOverpressure', () => {
   it('measures normal pressure from the datum offset', () => {
     // Depths from a rig floor 25 m above sea level: hydrostatic from sea level is not overpressure.
     const porePa = tvdM.map((z) => normal * Math.max(0, z - 25));
-    expect(
-      topOfOverpressure({ tvdM, porePa, normalGradientPaM: normal, marginPaM: 0, minThicknessM: 50, datumOffsetM: 25 }),
-    ).toBeNull();
+    expect(topOfOverpressure({ tvdM, porePa, normalGradientPaM: normal, marginPaM: 0, minThicknessM: 50, datumOffsetM: 25 })).toBeNull();
   });
 
   it('rejects bad input with exact messages', () => {
     expect(() =>
       topOfOverpressure({ tvdM: [0, 20, 10], porePa: [0, 0, 0], normalGradientPaM: normal, marginPaM: 0, minThicknessM: 0 }),
     ).toThrow(new Error('topOfOverpressure: tvdM must be sorted ascending (tvdM[2] = 10 after 20)'));
-    expect(() =>
-      topOfOverpressure({ tvdM: [0, 10], porePa: [0, 0], normalGradientPaM: normal, marginPaM: -1, minThicknessM: 0 }),
-    ).toThrow(new Error('topOfOverpressure: marginPaM must be >= 0 (got -1)'));
-    expect(() =>
-      topOfOverpressure({ tvdM: [0, 10], porePa: [0], normalGradientPaM: normal, marginPaM: 0, minThicknessM: 0 }),
-    ).toThrow(new Error('topOfOverpressure: porePa has length 1 but tvdM has length 2'));
+    expect(() => topOfOverpressure({ tvdM: [0, 10], porePa: [0, 0], normalGradientPaM: normal, marginPaM: -1, minThicknessM: 0 })).toThrow(
+      new Error('topOfOverpressure: marginPaM must be >= 0 (got -1)'),
+    );
+    expect(() => topOfOverpressure({ tvdM: [0, 10], porePa: [0], normalGradientPaM: normal, marginPaM: 0, minThicknessM: 0 })).toThrow(
+      new Error('topOfOverpressure: porePa has length 1 but tvdM has length 2'),
+    );
   });
 });

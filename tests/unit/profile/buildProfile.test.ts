@@ -1,12 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import {
-  eatonSonic,
-  fitNormalTrend,
-  G,
-  hydrostatic,
-  PPG_KGM3,
-  topOfOverpressure,
-} from '@shared/pressure';
+import { eatonSonic, fitNormalTrend, G, hydrostatic, PPG_KGM3, topOfOverpressure } from '@shared/pressure';
 import { buildProfile, shareBelowNormal, type BuildProfileInput } from '@shared/profile';
 import { PSI_PA } from '@shared/units';
 
@@ -174,7 +167,10 @@ describe('buildProfile: pore pressure, fracture and top', () => {
     const raw = buildProfile(input({ logs: { sonicUsFt: spiky, densityKgM3: new Float64Array(tvdM.length).fill(RHO) } }));
     const base = input().interpretation;
     const smooth = buildProfile(
-      input({ logs: { sonicUsFt: spiky, densityKgM3: new Float64Array(tvdM.length).fill(RHO) }, interpretation: { ...base, pore: { method: 'eaton-sonic', exponent: 3, smoothingM: 20 } } }),
+      input({
+        logs: { sonicUsFt: spiky, densityKgM3: new Float64Array(tvdM.length).fill(RHO) },
+        interpretation: { ...base, pore: { method: 'eaton-sonic', exponent: 3, smoothingM: 20 } },
+      }),
     );
     const spikeDepth = tvdM[37 * 30];
     const i = indexOf(raw, spikeDepth);
@@ -193,7 +189,13 @@ describe('buildProfile: pore pressure, fracture and top', () => {
 
   it('Bowers loading needs no trend', () => {
     const q = buildProfile(
-      input({ interpretation: { ...input().interpretation, trend: null, pore: { method: 'bowers', v0: 5000, A: 4.4561, B: 0.8168, unloading: null } } }),
+      input({
+        interpretation: {
+          ...input().interpretation,
+          trend: null,
+          pore: { method: 'bowers', v0: 5000, A: 4.4561, B: 0.8168, unloading: null },
+        },
+      }),
     );
     expect(Number.isFinite(q.porePa![indexOf(q, 2000)])).toBe(true);
   });
@@ -212,7 +214,9 @@ describe('buildProfile: pore pressure, fracture and top', () => {
     );
     expect(q.porePa![indexOf(q, 2000)]).toBeCloseTo(low(2000), -2);
     // Samples 126–3000 m carry a pore value; 1001–3000 m of them are below: 2000 / 2875 = 70 %.
-    expect(q.notes).toContain("Pore pressure from Bowers is below hydrostatic over 70 % of the logged interval: calibrate A and B to this basin's formation tests.");
+    expect(q.notes).toContain(
+      "Pore pressure from Bowers is below hydrostatic over 70 % of the logged interval: calibrate A and B to this basin's formation tests.",
+    );
     expect(q.notes.some((n) => n.startsWith('Fracture pressure is below hydrostatic'))).toBe(false);
   });
 

@@ -57,6 +57,8 @@ describe('interpolation helpers', () => {
 describe('wellDatums', () => {
   it('sea level is the datum elevation; the mudline adds air gap and water depth', () => {
     expect(wellDatums({ datumElevationM: 25, waterDepthM: 100, airGapM: 25 })).toEqual({ seaLevelTvdM: 25, mudlineTvdM: 125 });
-    expect(() => wellDatums({ datumElevationM: 25, waterDepthM: -1, airGapM: 25 })).toThrow('wellDatums: waterDepthM must be >= 0 (got -1)');
+    expect(() => wellDatums({ datumElevationM: 25, waterDepthM: -1, airGapM: 25 })).toThrow(
+      'wellDatums: waterDepthM must be >= 0 (got -1)',
+    );
   });
 });

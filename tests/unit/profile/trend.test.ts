@@ -12,7 +12,11 @@ const res = tvdM.map((z, i) => 0.7 * 10 ** (1.2e-4 * (z - mudline)) * Math.exp(0
 describe('fitTrend', () => {
   it('fits on depth below the mudline with fitNormalTrend: same parameters and r² as the reference call', () => {
     const fit = fitTrend({ tvdM, mudlineTvdM: mudline, values: dt }, { model: 'exponential', fromM: 400, toM: 2200, gammaCutoffApi: null });
-    const ref = fitNormalTrend(tvdM.map((z) => z - mudline), dt, { model: 'exponential', fromM: 275, toM: 2075 });
+    const ref = fitNormalTrend(
+      tvdM.map((z) => z - mudline),
+      dt,
+      { model: 'exponential', fromM: 275, toM: 2075 },
+    );
     expect(ref.model).toBe('exponential');
     if (ref.model !== 'exponential') return;
     expect(fit.params.surface).toBeCloseTo(ref.params.surface, 9);
@@ -25,13 +29,19 @@ describe('fitTrend', () => {
 
   it('trendR2 of the fitted parameters reproduces the fitter’s r² (exponential and loglinear)', () => {
     const e = fitTrend({ tvdM, mudlineTvdM: mudline, values: dt }, { model: 'exponential', fromM: 400, toM: 2200, gammaCutoffApi: null });
-    const eR2 = trendR2({ tvdM, mudlineTvdM: mudline, values: dt }, { curve: 'sonic', model: 'exponential', fromM: 400, toM: 2200, params: e.params, gammaCutoffApi: null });
+    const eR2 = trendR2(
+      { tvdM, mudlineTvdM: mudline, values: dt },
+      { curve: 'sonic', model: 'exponential', fromM: 400, toM: 2200, params: e.params, gammaCutoffApi: null },
+    );
     expect(eR2.r2).toBeCloseTo(e.r2, 10);
     expect(eR2.n).toBe(e.n);
     const l = fitTrend({ tvdM, mudlineTvdM: mudline, values: res }, { model: 'loglinear', fromM: 400, toM: 2200, gammaCutoffApi: null });
     // Hottmann & Johnson 1965 form log10 R = a + b z: the slope comes back near the 1.2e-4 /m put in.
     expect(l.params.b).toBeCloseTo(1.2e-4, 5);
-    const lR2 = trendR2({ tvdM, mudlineTvdM: mudline, values: res }, { curve: 'resistivity', model: 'loglinear', fromM: 400, toM: 2200, params: l.params, gammaCutoffApi: null });
+    const lR2 = trendR2(
+      { tvdM, mudlineTvdM: mudline, values: res },
+      { curve: 'resistivity', model: 'loglinear', fromM: 400, toM: 2200, params: l.params, gammaCutoffApi: null },
+    );
     expect(lR2.r2).toBeCloseTo(l.r2, 10);
   });
 
@@ -39,22 +49,32 @@ describe('fitTrend', () => {
     const e = fitTrend({ tvdM, mudlineTvdM: mudline, values: dt }, { model: 'exponential', fromM: 400, toM: 2200, gammaCutoffApi: null });
     const edited = trendR2(
       { tvdM, mudlineTvdM: mudline, values: dt },
-      { curve: 'sonic', model: 'exponential', fromM: 400, toM: 2200, params: { ...e.params, surface: e.params.surface + 20 }, gammaCutoffApi: null },
+      {
+        curve: 'sonic',
+        model: 'exponential',
+        fromM: 400,
+        toM: 2200,
+        params: { ...e.params, surface: e.params.surface + 20 },
+        gammaCutoffApi: null,
+      },
     );
     expect(edited.r2).toBeLessThan(e.r2 - 0.05);
   });
 
   it('the gamma-ray cut-off leaves sand samples out of the fit', () => {
     const gammaApi = tvdM.map((_, i) => (i % 4 === 0 ? 40 : 90));
-    const fit = fitTrend({ tvdM, mudlineTvdM: mudline, values: dt, gammaApi }, { model: 'exponential', fromM: 400, toM: 2200, gammaCutoffApi: 60 });
+    const fit = fitTrend(
+      { tvdM, mudlineTvdM: mudline, values: dt, gammaApi },
+      { model: 'exponential', fromM: 400, toM: 2200, gammaCutoffApi: 60 },
+    );
     const all = fitTrend({ tvdM, mudlineTvdM: mudline, values: dt }, { model: 'exponential', fromM: 400, toM: 2200, gammaCutoffApi: null });
     expect(fit.n).toBe(all.n - Math.ceil(all.n / 4));
   });
 
   it('refuses an interval above the mudline', () => {
-    expect(() => fitTrend({ tvdM, mudlineTvdM: mudline, values: dt }, { model: 'exponential', fromM: 100, toM: 900, gammaCutoffApi: null })).toThrow(
-      'fitTrend: the trend interval must start at or below the mudline (125 m; got 100 m)',
-    );
+    expect(() =>
+      fitTrend({ tvdM, mudlineTvdM: mudline, values: dt }, { model: 'exponential', fromM: 100, toM: 900, gammaCutoffApi: null }),
+    ).toThrow('fitTrend: the trend interval must start at or below the mudline (125 m; got 100 m)');
   });
 
   it('trendValues is NaN above the mudline and the model below it', () => {
@@ -66,8 +86,15 @@ describe('fitTrend', () => {
 
 describe('fitTrend with the matrix held', () => {
   it('passes the matrix value to fitNormalTrend and fits the rest', () => {
-    const fit = fitTrend({ tvdM, mudlineTvdM: mudline, values: dt }, { model: 'exponential', fromM: 400, toM: 2200, gammaCutoffApi: null, matrixValue: 60 });
-    const ref = fitNormalTrend(tvdM.map((z) => z - mudline), dt, { model: 'exponential', fromM: 275, toM: 2075, matrixValue: 60 });
+    const fit = fitTrend(
+      { tvdM, mudlineTvdM: mudline, values: dt },
+      { model: 'exponential', fromM: 400, toM: 2200, gammaCutoffApi: null, matrixValue: 60 },
+    );
+    const ref = fitNormalTrend(
+      tvdM.map((z) => z - mudline),
+      dt,
+      { model: 'exponential', fromM: 275, toM: 2075, matrixValue: 60 },
+    );
     expect(fit.params.matrix).toBe(60);
     expect(ref.model === 'exponential' && fit.params.cPerM).toBeCloseTo(ref.model === 'exponential' ? ref.params.cPerM : NaN, 12);
   });

@@ -16,7 +16,12 @@ describe('drilling window', () => {
   });
 
   it('as drilled: each shoe test against the heaviest mud below it, narrowest section', () => {
-    const o = (kind: 'lot' | 'fit' | 'mud_weight', kgM3: number, z: number) => ({ kind, quality: 'good' as const, tvdM: z, valueSi: emw(kgM3, z) });
+    const o = (kind: 'lot' | 'fit' | 'mud_weight', kgM3: number, z: number) => ({
+      kind,
+      quality: 'good' as const,
+      tvdM: z,
+      valueSi: emw(kgM3, z),
+    });
     const w = measuredWindow([
       o('mud_weight', 1100, 800), // above the first shoe: no test to compare with
       o('lot', 1650, 1000),
@@ -50,7 +55,9 @@ describe('profileCsv', () => {
     expect(lines[0]).toBe(`# ${PROFILE_CAUTION}`);
     expect(lines[1]).toBe('# Well: Test, "one"');
     expect(lines[2]).toBe('# Version: 3');
-    expect(lines[4]).toBe('MD (ft),TVD (ft),TVDSS (ft),Below mudline (ft),Hydrostatic (psi),Overburden (psi),Hydrostatic EMW (ppg),Overburden EMW (ppg),Density (kg/m3),Density source');
+    expect(lines[4]).toBe(
+      'MD (ft),TVD (ft),TVDSS (ft),Below mudline (ft),Hydrostatic (psi),Overburden (psi),Hydrostatic EMW (ppg),Overburden EMW (ppg),Density (kg/m3),Density source',
+    );
   });
 
   it('writes values in the chosen units: 1000 m of brine from sea level', () => {
@@ -81,14 +88,23 @@ describe('profileCsv', () => {
         baseTvdM: 1000,
         interpretation: {
           normalDensityKgM3: 1030,
-          trend: curve === 'sonic'
-            ? { curve, model: 'exponential', fromM: 300, toM: 900, params: { matrix: 60, surface: 190, cPerM: 4.5e-4 }, gammaCutoffApi: null }
-            : { curve, model: 'loglinear', fromM: 300, toM: 900, params: { a: 0, b: 1e-4 }, gammaCutoffApi: null },
+          trend:
+            curve === 'sonic'
+              ? {
+                  curve,
+                  model: 'exponential',
+                  fromM: 300,
+                  toM: 900,
+                  params: { matrix: 60, surface: 190, cPerM: 4.5e-4 },
+                  gammaCutoffApi: null,
+                }
+              : { curve, model: 'loglinear', fromM: 300, toM: 900, params: { a: 0, b: 1e-4 }, gammaCutoffApi: null },
           pore: null,
           fracture: null,
         },
       });
-    const header = (curve: 'sonic' | 'resistivity') => profileCsv(withTrend(curve), { wellName: 'W', depthUnit: 'm', pressureUnit: 'MPa', emwUnit: 'sg' }).split('\r\n')[3];
+    const header = (curve: 'sonic' | 'resistivity') =>
+      profileCsv(withTrend(curve), { wellName: 'W', depthUnit: 'm', pressureUnit: 'MPa', emwUnit: 'sg' }).split('\r\n')[3];
     expect(header('sonic').endsWith(',Normal trend (µs/ft)')).toBe(true);
     expect(header('resistivity').endsWith(',Normal trend (ohm·m)')).toBe(true);
   });

@@ -20,7 +20,9 @@ describe('reference-layer messages', () => {
     expect(invalidGeometryMessage(1, { name: 'Bowtie' }, 'Self-intersection[-101.225 -32.625]')).toBe(
       'Feature 1 ("Bowtie") is not a valid geometry: its outline crosses itself near lon -101.225, lat -32.625.',
     );
-    expect(invalidGeometryMessage(3, {}, 'Too few points[1 2]')).toBe('Feature 3 is not a valid geometry: it has too few points near lon 1, lat 2.');
+    expect(invalidGeometryMessage(3, {}, 'Too few points[1 2]')).toBe(
+      'Feature 3 is not a valid geometry: it has too few points near lon 1, lat 2.',
+    );
     expect(invalidGeometryMessage(2, null, 'Something new')).toBe('Feature 2 is not a valid geometry: something new.');
   });
 });

@@ -22,9 +22,20 @@ describe('session tokens', () => {
 
   it('rejects a correctly signed token that names no session id or version (it could never be ended)', async () => {
     const iat = t0 / 1000;
-    const bare = new SignJWT({}).setProtectedHeader({ alg: 'HS256' }).setSubject('user-1').setIssuer('porelith').setIssuedAt(iat).setExpirationTime(iat + 600);
+    const bare = new SignJWT({})
+      .setProtectedHeader({ alg: 'HS256' })
+      .setSubject('user-1')
+      .setIssuer('porelith')
+      .setIssuedAt(iat)
+      .setExpirationTime(iat + 600);
     expect(await verifySession(await bare.sign(new TextEncoder().encode(secret)), secret, t0)).toBeNull();
-    const noVersion = new SignJWT({}).setProtectedHeader({ alg: 'HS256' }).setSubject('user-1').setJti(grant.sessionId).setIssuer('porelith').setIssuedAt(iat).setExpirationTime(iat + 600);
+    const noVersion = new SignJWT({})
+      .setProtectedHeader({ alg: 'HS256' })
+      .setSubject('user-1')
+      .setJti(grant.sessionId)
+      .setIssuer('porelith')
+      .setIssuedAt(iat)
+      .setExpirationTime(iat + 600);
     expect(await verifySession(await noVersion.sign(new TextEncoder().encode(secret)), secret, t0)).toBeNull();
   });
 

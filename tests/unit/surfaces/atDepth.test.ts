@@ -25,7 +25,8 @@ const overburdenPa = (z: number) => 1025 * g * 100 + 2300 * g * (z - 125);
 const share = (z: number) => 0.5 * Math.min(1, Math.max(0, (z - 1500) / 1000));
 const porePa = (z: number) => normalPa(z) + share(z) * (overburdenPa(z) - normalPa(z));
 /** Eaton inverted: S − P = (1 − f)(S − Pn) ⇒ Δt = Δtn·(1 − f)^(−1/3). */
-const sonicUsFt = (z: number) => (trend.matrix + (trend.surface - trend.matrix) * Math.exp(-trend.cPerM * (z - 125))) * (1 - share(z)) ** (-1 / 3);
+const sonicUsFt = (z: number) =>
+  (trend.matrix + (trend.surface - trend.matrix) * Math.exp(-trend.cPerM * (z - 125))) * (1 - share(z)) ** (-1 / 3);
 
 function constructed(gap?: [number, number]) {
   const tvdM = Float64Array.from({ length: 3000 - 125 + 1 }, (_, i) => 125 + i);
@@ -66,7 +67,10 @@ describe('pressureAtDepth: a well’s pore pressure, EMW and overpressure at one
   it('interpolates between samples and never extrapolates below the deepest one', () => {
     const r = pressureAtDepth(profile, 2999.5);
     expect(r.ok && r.value.porePa).toBeCloseTo(porePa(2999.5), -1);
-    expect(pressureAtDepth(profile, 3000.5)).toEqual({ ok: false, reason: 'its pore-pressure curve ends at 2975 m TVDSS, above the depth' });
+    expect(pressureAtDepth(profile, 3000.5)).toEqual({
+      ok: false,
+      reason: 'its pore-pressure curve ends at 2975 m TVDSS, above the depth',
+    });
     expect(pressureAtDepth(profile, 100)).toEqual({ ok: false, reason: 'the depth lies above its mudline (100 m TVDSS)' });
   });
 
@@ -82,10 +86,16 @@ describe('pressureAtDepth: a well’s pore pressure, EMW and overpressure at one
   it('says why there is no value for a well without a pore-pressure method or a usable log', () => {
     const tvdM = Float64Array.from([125, 1000, 2000]);
     const none = buildProfile({ well, tvdM, logs: { sonicUsFt: tvdM.map(sonicUsFt) }, interpretation: { ...interpretation, pore: null } });
-    expect(pressureAtDepth(none, 1500)).toEqual({ ok: false, reason: 'no log-derived pore pressure: the interpretation has no pore-pressure method' });
+    expect(pressureAtDepth(none, 1500)).toEqual({
+      ok: false,
+      reason: 'no log-derived pore pressure: the interpretation has no pore-pressure method',
+    });
     const noSonic = buildProfile({ well, tvdM, logs: { densityKgM3: tvdM.map(() => 2300) }, interpretation });
     const r = pressureAtDepth(noSonic, 1500);
-    expect(r).toEqual({ ok: false, reason: 'no log-derived pore pressure: Pore pressure by eaton-sonic needs a sonic log, which this well does not have.' });
+    expect(r).toEqual({
+      ok: false,
+      reason: 'no log-derived pore pressure: Pore pressure by eaton-sonic needs a sonic log, which this well does not have.',
+    });
     expect(() => pressureAtDepth(none, Number.NaN)).toThrow('pressureAtDepth: tvdM must be a finite depth > 0 (got NaN)');
   });
 });

@@ -14,11 +14,26 @@ const [w, s, e, n] = basin.basin.bbox;
 const outline = turf.bboxPolygon([w + 0.05, s + 0.05, e - 0.05, n - 0.05]).geometry as Polygon;
 const picks: SurfaceInputPoint[] = basin.wells.flatMap((well) => {
   const pick = demoTopPick(well);
-  return pick ? [{ wellId: crypto.randomUUID(), name: well.name, lon: well.lon, lat: well.lat, value: pick.tvdM - well.datumElevationM, interpretationVersion: 1 }] : [];
+  return pick
+    ? [
+        {
+          wellId: crypto.randomUUID(),
+          name: well.name,
+          lon: well.lon,
+          lat: well.lat,
+          value: pick.tvdM - well.datumElevationM,
+          interpretationVersion: 1,
+        },
+      ]
+    : [];
 });
 
 function run(method: object, points = picks, extra: object = {}) {
-  return computeSurface({ points, outline, params: surfaceRequestBody.parse({ method, cellSizeM: 1000, extentBufferKm: 0, contourIntervalM: 100, ...extra }) });
+  return computeSurface({
+    points,
+    outline,
+    params: surfaceRequestBody.parse({ method, cellSizeM: 1000, extentBufferKm: 0, contourIntervalM: 100, ...extra }),
+  });
 }
 
 /** Grid cell centres back in lon/lat with their value, inside the wells' convex hull only (no extrapolation). */
@@ -83,7 +98,12 @@ describe('TOP surface of the demo basin against its hidden truth', () => {
     });
     const loo = leaveOneOut(data, { kind: 'kriging', variogram: r.variogram!.model });
     const z = loo.residuals.map((q) => q.residual / q.stdDev!);
-    return { meanAbs: z.reduce((a, b) => a + Math.abs(b), 0) / z.length, rms: Math.sqrt(z.reduce((a, b) => a + b * b, 0) / z.length), rmse: loo.rmse, meanSd: loo.residuals.reduce((a, q) => a + q.stdDev!, 0) / z.length };
+    return {
+      meanAbs: z.reduce((a, b) => a + Math.abs(b), 0) / z.length,
+      rms: Math.sqrt(z.reduce((a, b) => a + b * b, 0) / z.length),
+      rmse: loo.rmse,
+      meanSd: loo.residuals.reduce((a, q) => a + q.stdDev!, 0) / z.length,
+    };
   };
 
   it('gives kriging standard deviations consistent with the cross-validation errors (exponential model)', () => {
@@ -106,14 +126,18 @@ describe('TOP surface of the demo basin against its hidden truth', () => {
   it('keeps a gaussian fit solvable with a small nugget, so its cross-validation stays in line with the others', () => {
     const gaussian = run({ kind: 'kriging', model: 'gaussian' });
     // A gaussian with no nugget made the system nearly singular (leave-one-out errors of kilometres).
-    expect(gaussian.variogram!.model.nugget).toBeGreaterThanOrEqual(0.0099 * (gaussian.variogram!.model.nugget + gaussian.variogram!.model.sill));
+    expect(gaussian.variogram!.model.nugget).toBeGreaterThanOrEqual(
+      0.0099 * (gaussian.variogram!.model.nugget + gaussian.variogram!.model.sill),
+    );
     expect(gaussian.crossValidation.rmse).toBeLessThan(2 * kriged.crossValidation.rmse);
     expect(rmseAgainstTruth(gaussian)).toBeLessThan(150);
   });
 
   it('with a planar trend removed, kriges the residuals: no worse against the truth, and a variogram that levels off', () => {
     const detrended = run({ kind: 'kriging', model: 'spherical', trend: 'planar' });
-    expect(detrended.warnings.some((w) => /^A planar regional trend was removed before kriging \(rising [\d.]+ m per km toward \d+°\)/.test(w))).toBe(true);
+    expect(
+      detrended.warnings.some((w) => /^A planar regional trend was removed before kriging \(rising [\d.]+ m per km toward \d+°\)/.test(w)),
+    ).toBe(true);
     expect(rmseAgainstTruth(detrended)).toBeLessThan(rmseAgainstTruth(kriged) * 1.1);
     // The residual variogram's outer lags are far closer to its model's sill than the raw ones (the trend was most of the rise).
     const outerOverSill = (r: ReturnType<typeof run>) => {
@@ -130,7 +154,8 @@ describe('TOP surface of the demo basin against its hidden truth', () => {
   it('draws closed contour rings that nest: the region deeper than a level lies inside the region of a shallower one', () => {
     const features = kriged.contours.features as { properties: { value: number }; geometry: { coordinates: number[][][][] } }[];
     expect(features.length).toBeGreaterThan(3);
-    for (const f of features) for (const poly of f.geometry.coordinates) for (const ring of poly) expect(ring[0]).toEqual(ring[ring.length - 1]);
+    for (const f of features)
+      for (const poly of f.geometry.coordinates) for (const ring of poly) expect(ring[0]).toEqual(ring[ring.length - 1]);
     for (let k = 1; k < features.length; k++) {
       const outer = turf.multiPolygon(features[k - 1].geometry.coordinates);
       const inner = turf.multiPolygon(features[k].geometry.coordinates);
@@ -147,7 +172,9 @@ describe('TOP surface of the demo basin against its hidden truth', () => {
 describe('bad input', () => {
   const three = picks.slice(0, 3);
   it('needs at least three wells', () => {
-    expect(() => run({ kind: 'idw', power: 2 }, picks.slice(0, 2))).toThrow(new SurfaceInputError('A surface needs at least 3 wells with a value at different locations; found 2.'));
+    expect(() => run({ kind: 'idw', power: 2 }, picks.slice(0, 2))).toThrow(
+      new SurfaceInputError('A surface needs at least 3 wells with a value at different locations; found 2.'),
+    );
   });
 
   it('merges duplicate locations with a warning', () => {
@@ -157,7 +184,10 @@ describe('bad input', () => {
   });
 
   it('makes a flat surface with zero variance when all values are equal', () => {
-    const r = run({ kind: 'kriging', model: 'spherical' }, picks.slice(0, 6).map((p) => ({ ...p, value: 2500 })));
+    const r = run(
+      { kind: 'kriging', model: 'spherical' },
+      picks.slice(0, 6).map((p) => ({ ...p, value: 2500 })),
+    );
     expect(r.grid.min).toBe(2500);
     expect(r.grid.max).toBe(2500);
     expect(r.grid.stdDev!.every((v) => v === null || v === 0)).toBe(true);
@@ -165,7 +195,9 @@ describe('bad input', () => {
   });
 
   it('refuses a cell size that would make too many cells', () => {
-    expect(() => run({ kind: 'idw', power: 2 }, picks, { cellSizeM: 25 })).toThrow(/^Grid of \d+ × \d+ = \d+ cells exceeds the limit of 250000: choose a larger cell size\.$/);
+    expect(() => run({ kind: 'idw', power: 2 }, picks, { cellSizeM: 25 })).toThrow(
+      /^Grid of \d+ × \d+ = \d+ cells exceeds the limit of 250000: choose a larger cell size\.$/,
+    );
   });
 });
 
@@ -186,7 +218,10 @@ describe('quantities in other units and progress', () => {
       if (v === null) expect(pressure.grid.values[i]).toBeNull();
       else expect(pressure.grid.values[i]! / (v * k)).toBeCloseTo(1, 9);
     });
-    expect(pressure.grid.stdDev![depth.grid.values.findIndex((v) => v !== null)]! / (depth.grid.stdDev![depth.grid.values.findIndex((v) => v !== null)]! * k)).toBeCloseTo(1, 9);
+    expect(
+      pressure.grid.stdDev![depth.grid.values.findIndex((v) => v !== null)]! /
+        (depth.grid.stdDev![depth.grid.values.findIndex((v) => v !== null)]! * k),
+    ).toBeCloseTo(1, 9);
     expect(pressure.crossValidation.rmse / (depth.crossValidation.rmse * k)).toBeCloseTo(1, 9);
     expect(pressure.variogram!.model.sill).toBeCloseTo(variogram.sill * k * k, 0);
     expect((pressure.contours.features[0] as { properties: { label: string } }).properties.label).toMatch(/ Pa$/);
@@ -195,7 +230,11 @@ describe('quantities in other units and progress', () => {
   it('reports progress during the interpolation, not only between phases', () => {
     const calls: [string, number, number][] = [];
     computeSurface(
-      { points: picks, outline, params: surfaceRequestBody.parse({ method: { kind: 'kriging', variogram }, cellSizeM: 250, extentBufferKm: 0 }) },
+      {
+        points: picks,
+        outline,
+        params: surfaceRequestBody.parse({ method: { kind: 'kriging', variogram }, cellSizeM: 250, extentBufferKm: 0 }),
+      },
       (phase, done, total) => calls.push([phase, done, total]),
     );
     const during = calls.filter(([phase, done, total]) => phase === 'interpolating' && done > 0 && done < total);
@@ -207,7 +246,10 @@ describe('quantities in other units and progress', () => {
   it('asks for the depth of an at-depth quantity, naming the field', () => {
     const r = surfaceRequestBody.safeParse({ quantity: 'emw_at_depth' });
     expect(r.success).toBe(false);
-    expect(r.error!.issues[0]).toMatchObject({ path: ['depthTvdssM'], message: 'is required for emw_at_depth: the depth below sea level, m' });
+    expect(r.error!.issues[0]).toMatchObject({
+      path: ['depthTvdssM'],
+      message: 'is required for emw_at_depth: the depth below sea level, m',
+    });
   });
 });
 

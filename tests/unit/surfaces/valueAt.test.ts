@@ -7,7 +7,24 @@ const projection = '+proj=aeqd +lat_0=-32.5 +lon_0=-101 +x_0=0 +y_0=0 +datum=WGS
 const toLonLat = (x: number, y: number) => proj4(projection, 'EPSG:4326').forward([x, y]) as [number, number];
 
 function grid(nx: number, ny: number, values: (number | null)[], stdDev: (number | null)[] | null = null): Surface['grid'] {
-  return { nx, ny, cellSizeM: 100, projection, x0: 0, y0: 0, values, stdDev, cornersLonLat: [[0, 0], [0, 0], [0, 0], [0, 0]], min: 0, max: 0 };
+  return {
+    nx,
+    ny,
+    cellSizeM: 100,
+    projection,
+    x0: 0,
+    y0: 0,
+    values,
+    stdDev,
+    cornersLonLat: [
+      [0, 0],
+      [0, 0],
+      [0, 0],
+      [0, 0],
+    ],
+    min: 0,
+    max: 0,
+  };
 }
 
 describe('valueAt: the surface at a lon/lat', () => {

@@ -19,7 +19,8 @@ const planarKm2 = (g: Polygon | MultiPolygon) => area(g) / 1e6;
 type CountriesTopology = Topology<{ countries: GeometryCollection<{ name: string }>; land: GeometryCollection }>;
 const require = createRequire(import.meta.url);
 const topo = (scale: Scale) => require(`world-atlas/countries-${scale}.json`) as CountriesTopology;
-const countries = (scale: Scale) => feature(topo(scale), topo(scale).objects.countries).features as Feature<Polygon | MultiPolygon, { name: string }>[];
+const countries = (scale: Scale) =>
+  feature(topo(scale), topo(scale).objects.countries).features as Feature<Polygon | MultiPolygon, { name: string }>[];
 const country = (scale: Scale, name: string) => countries(scale).find((f) => f.properties.name === name)!;
 
 function planarMulti(g: Polygon | MultiPolygon): MultiPolygon {
@@ -29,8 +30,27 @@ function planarMulti(g: Polygon | MultiPolygon): MultiPolygon {
 
 describe('unwrapLongitudes', () => {
   it('continues across the antimeridian and counts a full turn', () => {
-    expect(unwrapLongitudes([[179, 0], [-179, 1], [-178, 2]])).toEqual({ path: [[179, 0], [181, 1], [182, 2]], turns: 1 });
-    expect(unwrapLongitudes([[170, 0], [-170, 0], [170, 1]]).turns).toBe(0);
+    expect(
+      unwrapLongitudes([
+        [179, 0],
+        [-179, 1],
+        [-178, 2],
+      ]),
+    ).toEqual({
+      path: [
+        [179, 0],
+        [181, 1],
+        [182, 2],
+      ],
+      turns: 1,
+    });
+    expect(
+      unwrapLongitudes([
+        [170, 0],
+        [-170, 0],
+        [170, 1],
+      ]).turns,
+    ).toBe(0);
   });
 });
 
@@ -79,7 +99,8 @@ describe('countryLabels', () => {
 
   it('puts every label inside its own country (checked with turf at 50m, else 10m)', () => {
     const shapes = new Map<string, MultiPolygon>();
-    for (const scale of ['10m', '50m'] as const) for (const f of countries(scale)) if (f.geometry) shapes.set(f.properties.name, planarMulti(f.geometry));
+    for (const scale of ['10m', '50m'] as const)
+      for (const f of countries(scale)) if (f.geometry) shapes.set(f.properties.name, planarMulti(f.geometry));
     expect(labels.length).toBe(shapes.size);
     const outside = labels.filter((l) => {
       const shape = shapes.get(l.properties.name)!;
@@ -118,7 +139,9 @@ describe('seaLabels', () => {
       const onLand = seaLabels().features.filter((s) => {
         const [lon, lat] = s.geometry.coordinates;
         return polys.some(({ poly, box }) =>
-          [lon, lon + 360].some((x) => x >= box[0] && x <= box[2] && lat >= box[1] && lat <= box[3] && booleanPointInPolygon([x, lat], poly)),
+          [lon, lon + 360].some(
+            (x) => x >= box[0] && x <= box[2] && lat >= box[1] && lat <= box[3] && booleanPointInPolygon([x, lat], poly),
+          ),
         );
       });
       expect(onLand.map((s) => `${scale} ${s.properties.name}`)).toEqual([]);

@@ -94,7 +94,13 @@ describe('writePmtiles', () => {
     expect(header.numTileContents).toBe(2);
     // Zoom-1 tiles have consecutive Hilbert ids 1–4, so they collapse to one run.
     expect(header.numTileEntries).toBe(2);
-    for (const [x, y] of [[0, 0], [1, 0], [0, 1], [1, 1]]) expect(textOf((await archive.getZxy(1, x, y))!.data)).toBe('open sea');
+    for (const [x, y] of [
+      [0, 0],
+      [1, 0],
+      [0, 1],
+      [1, 1],
+    ])
+      expect(textOf((await archive.getZxy(1, x, y))!.data)).toBe('open sea');
     expect(textOf((await archive.getZxy(0, 0, 0))!.data)).toBe('world');
   });
 

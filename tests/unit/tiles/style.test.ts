@@ -61,7 +61,9 @@ describe('basemapStyle', () => {
   });
 
   it('rejects an origin that is not scheme and host', () => {
-    expect(() => basemapStyle('maps.porelith.test')).toThrow('basemapStyle: origin must look like http://host:port, got "maps.porelith.test".');
+    expect(() => basemapStyle('maps.porelith.test')).toThrow(
+      'basemapStyle: origin must look like http://host:port, got "maps.porelith.test".',
+    );
     expect(() => basemapStyle('http://a.test/x')).toThrow('basemapStyle: origin must look like http://host:port, got "http://a.test/x".');
   });
 });

@@ -78,7 +78,10 @@ describe('minimumCurvature', () => {
     const inc = 37.5;
     const azi = 300;
     const tieIn = { mdM: 0, tvdM: 0, northM: 0, eastM: 0, incDeg: inc, aziDeg: azi };
-    const result = minimumCurvature([100, 400, 1000].map((mdM) => ({ mdM, incDeg: inc, aziDeg: azi })), tieIn);
+    const result = minimumCurvature(
+      [100, 400, 1000].map((mdM) => ({ mdM, incDeg: inc, aziDeg: azi })),
+      tieIn,
+    );
     for (const s of result) {
       expect(s.tvdM).toBeCloseTo(s.mdM * Math.cos(inc * DEG), 9);
       expect(s.northM).toBeCloseTo(s.mdM * Math.sin(inc * DEG) * Math.cos(azi * DEG), 9);
@@ -88,8 +91,16 @@ describe('minimumCurvature', () => {
   });
 
   it('normalises azimuths to [0, 360) and treats 350° and −10° alike', () => {
-    const a = minimumCurvature([{ mdM: 0, incDeg: 0, aziDeg: 0 }, { mdM: 100, incDeg: 30, aziDeg: -10 }, { mdM: 200, incDeg: 30, aziDeg: 720 }]);
-    const b = minimumCurvature([{ mdM: 0, incDeg: 0, aziDeg: 0 }, { mdM: 100, incDeg: 30, aziDeg: 350 }, { mdM: 200, incDeg: 30, aziDeg: 0 }]);
+    const a = minimumCurvature([
+      { mdM: 0, incDeg: 0, aziDeg: 0 },
+      { mdM: 100, incDeg: 30, aziDeg: -10 },
+      { mdM: 200, incDeg: 30, aziDeg: 720 },
+    ]);
+    const b = minimumCurvature([
+      { mdM: 0, incDeg: 0, aziDeg: 0 },
+      { mdM: 100, incDeg: 30, aziDeg: 350 },
+      { mdM: 200, incDeg: 30, aziDeg: 0 },
+    ]);
     expect(a.map((s) => s.aziDeg)).toEqual([0, 350, 0]);
     for (let i = 0; i < 3; i++) {
       expect(a[i].northM).toBeCloseTo(b[i].northM, 9);
@@ -102,7 +113,13 @@ describe('minimumCurvature', () => {
     // two stations 1e-7° apart in inclination over 30 m: the hold formula is the limit (RF → 1 + β²/12)
     const i1 = 45;
     const i2 = 45 + 1e-7;
-    const [, s] = minimumCurvature([{ mdM: 0, incDeg: i1, aziDeg: 0 }, { mdM: 30, incDeg: i2, aziDeg: 0 }], { mdM: 0, tvdM: 0, northM: 0, eastM: 0, incDeg: i1, aziDeg: 0 });
+    const [, s] = minimumCurvature(
+      [
+        { mdM: 0, incDeg: i1, aziDeg: 0 },
+        { mdM: 30, incDeg: i2, aziDeg: 0 },
+      ],
+      { mdM: 0, tvdM: 0, northM: 0, eastM: 0, incDeg: i1, aziDeg: 0 },
+    );
     const beta = (i2 - i1) * DEG;
     // the textbook acos form rounds cos β to 1 here and reports no dogleg at all
     expect(Math.acos(Math.cos(i2 * DEG - i1 * DEG))).toBe(0);
@@ -117,7 +134,11 @@ describe('minimumCurvature', () => {
     expect(survey.nodeCount).toBe(20_000);
     // positions are cumulative sums of chords: each step is no longer than its arc
     for (let k = 1; k < survey.nodeCount; k++) {
-      const chord = Math.hypot(survey.tvdM[k] - survey.tvdM[k - 1], survey.northM[k] - survey.northM[k - 1], survey.eastM[k] - survey.eastM[k - 1]);
+      const chord = Math.hypot(
+        survey.tvdM[k] - survey.tvdM[k - 1],
+        survey.northM[k] - survey.northM[k - 1],
+        survey.eastM[k] - survey.eastM[k - 1],
+      );
       expect(chord).toBeLessThanOrEqual(0.5 + 1e-12);
     }
   });
@@ -138,11 +159,18 @@ describe('minimumCurvature input checks', () => {
   });
 
   it('rejects a bad tie-in and a reversing direction', () => {
-    expect(() => minimumCurvature([ok], { mdM: 0, tvdM: Number.NaN, northM: 0, eastM: 0 })).toThrow('tieIn.tvdM must be a finite number, got NaN');
-    expect(() => minimumCurvature([ok], { mdM: 0, tvdM: 0, northM: 0, eastM: 0, incDeg: 200 })).toThrow('tieIn.incDeg must be within [0, 180] degrees, got 200');
-    expect(() => minimumCurvature([{ mdM: 10, incDeg: 0, aziDeg: 0 }, { mdM: 20, incDeg: 180, aziDeg: 0 }])).toThrow(
-      'Between station 0 and station 1 the direction reverses (dogleg 180°): no minimum-curvature arc exists',
+    expect(() => minimumCurvature([ok], { mdM: 0, tvdM: Number.NaN, northM: 0, eastM: 0 })).toThrow(
+      'tieIn.tvdM must be a finite number, got NaN',
     );
+    expect(() => minimumCurvature([ok], { mdM: 0, tvdM: 0, northM: 0, eastM: 0, incDeg: 200 })).toThrow(
+      'tieIn.incDeg must be within [0, 180] degrees, got 200',
+    );
+    expect(() =>
+      minimumCurvature([
+        { mdM: 10, incDeg: 0, aziDeg: 0 },
+        { mdM: 20, incDeg: 180, aziDeg: 0 },
+      ]),
+    ).toThrow('Between station 0 and station 1 the direction reverses (dogleg 180°): no minimum-curvature arc exists');
     expect(() => minimumCurvature('x' as never)).toThrow('stations must be an array');
   });
 });

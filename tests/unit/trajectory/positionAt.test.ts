@@ -13,7 +13,13 @@ function tangent(incDeg: number, aziDeg: number): [number, number, number] {
  * tangent t1 towards t2 over arc length L, R = L/β, the point at arc length s is
  * P1 + R·sin(s/R)·t1 + R·(1 − cos(s/R))·n with n = (t2 − t1 cos β)/sin β the unit normal towards the centre.
  */
-function exactArcPoint(p1: [number, number, number], t1: [number, number, number], t2: [number, number, number], L: number, s: number): [number, number, number] {
+function exactArcPoint(
+  p1: [number, number, number],
+  t1: [number, number, number],
+  t2: [number, number, number],
+  L: number,
+  s: number,
+): [number, number, number] {
   const cosB = t1[0] * t2[0] + t1[1] * t2[1] + t1[2] * t2[2];
   const beta = Math.acos(cosB);
   const R = L / beta;
@@ -60,7 +66,10 @@ describe('tvdAt / positionAt', () => {
   });
 
   it('extrapolates straight beyond the last station and above the tie-in', () => {
-    const stations = [{ mdM: 100, incDeg: 0, aziDeg: 0 }, { mdM: 200, incDeg: 30, aziDeg: 90 }];
+    const stations = [
+      { mdM: 100, incDeg: 0, aziDeg: 0 },
+      { mdM: 200, incDeg: 30, aziDeg: 90 },
+    ];
     const last = positionAt(stations, 200);
     const beyond = positionAt(stations, 350);
     expect(beyond.tvdM - last.tvdM).toBeCloseTo(150 * Math.cos(30 * DEG), 10);
@@ -80,7 +89,10 @@ describe('tvdAt / positionAt', () => {
     const mds = Array.from({ length: 500 }, (_, i) => -20 + i * 6.2);
     const sorted = tvdAt(survey, mds);
     const shuffledMds = mds.map((md, i) => ({ md, i })).sort((a, b) => Math.sin(a.md * 7.1) - Math.sin(b.md * 7.1));
-    const shuffled = tvdAt(survey, shuffledMds.map((e) => e.md));
+    const shuffled = tvdAt(
+      survey,
+      shuffledMds.map((e) => e.md),
+    );
     shuffledMds.forEach((e, j) => expect(shuffled[j]).toBe(sorted[e.i]));
     mds.slice(0, 50).forEach((md, i) => expect(tvdAt(survey, md)).toBe(sorted[i]));
     stations.forEach((s, i) => expect(tvdAt(survey, s.mdM)).toBeCloseTo(survey.tvdM[i], 9));

@@ -144,7 +144,16 @@ export function mudWeights(ctx: DrillingContext, tripMarginKgM3: number, shoes: 
   const report = (mdM: number, entered: number, source: string, kind: 'mud_weight' | 'loss' = 'mud_weight') => {
     const tvdM = path.tvdAtMd(mdM);
     out.push(
-      observation({ kind, mdM, tvdM, tvdFromSurvey: ctx.tvdFromSurvey, valueEntered: entered, unitEntered: unit, observedOn: ctx.dateAt(mdM), source }),
+      observation({
+        kind,
+        mdM,
+        tvdM,
+        tvdFromSurvey: ctx.tvdFromSurvey,
+        valueEntered: entered,
+        unitEntered: unit,
+        observedOn: ctx.dateAt(mdM),
+        source,
+      }),
     );
     if (kind === 'mud_weight') schedule.push({ mdM, emwKgM3: mudEntryKgM3(entered, unit) });
   };

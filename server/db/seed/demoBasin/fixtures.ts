@@ -15,10 +15,27 @@ import { buildWell, type DemoWell, type WellSpec } from './well';
  */
 export const FIXTURE_FILES = ['demo-wells.csv', 'demo-pressures.csv', 'demo-survey.csv', 'demo-well.las'] as const;
 
-const VERTICAL: PathDesign = { profile: 'vertical', kickOffMdM: 0, buildDegPer30m: 0, holdIncDeg: 0, aziDeg: 0, tangentM: 0, dropDegPer30m: 0, finalIncDeg: 0 };
+const VERTICAL: PathDesign = {
+  profile: 'vertical',
+  kickOffMdM: 0,
+  buildDegPer30m: 0,
+  holdIncDeg: 0,
+  aziDeg: 0,
+  tangentM: 0,
+  dropDegPer30m: 0,
+  finalIncDeg: 0,
+};
 
 /** The extra wells, placed in the basin away from the seeded fields. */
-const SITES: { name: string; lon: number; lat: number; operatorIndex: number; spudDate: string; design: PathDesign; tdBelowTopM: number }[] = [
+const SITES: {
+  name: string;
+  lon: number;
+  lat: number;
+  operatorIndex: number;
+  spudDate: string;
+  design: PathDesign;
+  tdBelowTopM: number;
+}[] = [
   { name: 'Skelby-1', lon: -101.085, lat: -32.66, operatorIndex: 1, spudDate: '2023-03-14', design: VERTICAL, tdBelowTopM: 900 },
   {
     name: 'Skelby-2',
@@ -26,7 +43,16 @@ const SITES: { name: string; lon: number; lat: number; operatorIndex: number; sp
     lat: -32.668,
     operatorIndex: 1,
     spudDate: '2023-09-02',
-    design: { profile: 'build-and-hold', kickOffMdM: 700, buildDegPer30m: 2.5, holdIncDeg: 35, aziDeg: 62.5, tangentM: 0, dropDegPer30m: 0, finalIncDeg: 0 },
+    design: {
+      profile: 'build-and-hold',
+      kickOffMdM: 700,
+      buildDegPer30m: 2.5,
+      holdIncDeg: 35,
+      aziDeg: 62.5,
+      tangentM: 0,
+      dropDegPer30m: 0,
+      finalIncDeg: 0,
+    },
     tdBelowTopM: 700,
   },
   { name: 'Wenlow-1', lon: -100.66, lat: -32.482, operatorIndex: 2, spudDate: '2024-01-20', design: VERTICAL, tdBelowTopM: 1000 },
@@ -75,8 +101,42 @@ const ft = (m: number) => r1(convert(m, 'm', 'ft'));
 
 function wellsCsv(wells: DemoWell[]): string {
   return csv(
-    ['name', 'uwi', 'operator', 'longitude', 'latitude', 'epsg', 'datum kind', 'RT elevation (m)', 'water depth (m)', 'air gap (m)', 'spud date', 'TD MD (m)', 'TD TVD (m)', 'status', 'offshore', 'note'],
-    wells.map((w) => [w.name, w.uwi, w.operator, w.lon, w.lat, 4326, w.datumKind, w.datumElevationM, w.waterDepthM, w.airGapM, w.spudDate, w.tdMdM, r1(w.tdTvdM), w.status, 'yes', w.note]),
+    [
+      'name',
+      'uwi',
+      'operator',
+      'longitude',
+      'latitude',
+      'epsg',
+      'datum kind',
+      'RT elevation (m)',
+      'water depth (m)',
+      'air gap (m)',
+      'spud date',
+      'TD MD (m)',
+      'TD TVD (m)',
+      'status',
+      'offshore',
+      'note',
+    ],
+    wells.map((w) => [
+      w.name,
+      w.uwi,
+      w.operator,
+      w.lon,
+      w.lat,
+      4326,
+      w.datumKind,
+      w.datumElevationM,
+      w.waterDepthM,
+      w.airGapM,
+      w.spudDate,
+      w.tdMdM,
+      r1(w.tdTvdM),
+      w.status,
+      'yes',
+      w.note,
+    ]),
   );
 }
 

@@ -85,13 +85,19 @@ export function demoWellSpecs(seed: number): WellSpec[] {
     s.xM = local.xM;
     s.yM = local.yM;
   }
-  const order = shuffled(rng, sites.map((_, i) => i));
+  const order = shuffled(
+    rng,
+    sites.map((_, i) => i),
+  );
   const profiles: WellProfile[] = sites.map(() => 'vertical');
   order.slice(0, LAYOUT_COUNTS.buildAndHold).forEach((i) => (profiles[i] = 'build-and-hold'));
   order.slice(LAYOUT_COUNTS.buildAndHold, LAYOUT_COUNTS.buildAndHold + LAYOUT_COUNTS.sShape).forEach((i) => (profiles[i] = 's-shape'));
   const rest = order.slice(LAYOUT_COUNTS.buildAndHold + LAYOUT_COUNTS.sShape);
   const shallow = new Set(rest.slice(0, LAYOUT_COUNTS.stoppedAboveTop));
-  const deep = shuffled(rng, order.filter((i) => !shallow.has(i)));
+  const deep = shuffled(
+    rng,
+    order.filter((i) => !shallow.has(i)),
+  );
   const kicks = new Set(deep.slice(0, LAYOUT_COUNTS.kicks));
   const losses = new Set(deep.slice(LAYOUT_COUNTS.kicks, LAYOUT_COUNTS.kicks + LAYOUT_COUNTS.losses));
 
@@ -110,7 +116,15 @@ export function demoWellSpecs(seed: number): WellSpec[] {
     const operatorIndex = s.field === null ? rng.int(0, DEMO_OPERATORS.length - 1) : DEMO_FIELDS[s.field].operator;
     const airGapM = Math.round(rng.uniform(22, 28) * 10) / 10;
     const status: WellStatus =
-      s.field === null ? (rng.chance(0.7) ? 'abandoned' : rng.chance(0.6) ? 'suspended' : 'drilled') : rng.chance(0.8) ? 'drilled' : 'suspended';
+      s.field === null
+        ? rng.chance(0.7)
+          ? 'abandoned'
+          : rng.chance(0.6)
+            ? 'suspended'
+            : 'drilled'
+        : rng.chance(0.8)
+          ? 'drilled'
+          : 'suspended';
     const deepEnough = kicks.has(i) ? rng.uniform(900, 1400) : rng.uniform(500, 1400);
     return {
       index: i,

@@ -143,7 +143,8 @@ export function synthesiseLogs(
     const ratio = (s - pn) / (s - pp);
     const dtShale = normalSlownessUsFt(below) * ratio ** (1 / t.sonic.exponent);
     const resShale = normalResistivityOhmM(below) * ratio ** (-1 / t.resistivity.exponent);
-    const grShale = t.gammaShaleApi.shallow + (t.gammaShaleApi.deep - t.gammaShaleApi.shallow) * (1 - Math.exp(-below / t.gammaShaleApi.scaleM));
+    const grShale =
+      t.gammaShaleApi.shallow + (t.gammaShaleApi.deep - t.gammaShaleApi.shallow) * (1 - Math.exp(-below / t.gammaShaleApi.scaleM));
     const v = sands ? sandFraction(beds, z) : 0;
     dt[i] = dtShale * (1 - v + v * t.sandSonicFactor);
     res[i] = resShale * t.sandResistivityFactor ** v;

@@ -1,4 +1,12 @@
-import { computeSurvey, minimumCurvature, positionAt, tvdAt, type StationInput, type Survey, type SurveyStation } from '../../../../shared/trajectory';
+import {
+  computeSurvey,
+  minimumCurvature,
+  positionAt,
+  tvdAt,
+  type StationInput,
+  type Survey,
+  type SurveyStation,
+} from '../../../../shared/trajectory';
 
 /**
  * Well paths of the demo: vertical, build-and-hold (J) and S-shaped, with stations every 30 m and

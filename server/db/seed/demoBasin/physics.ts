@@ -96,7 +96,8 @@ function onGrid(curve: Float64Array, tvdM: number): number {
  * @example atTvd(column, column.porePa, 2500.5);
  */
 export function atTvd(column: PressureColumn, curve: Float64Array, tvdM: number): number {
-  if (curve.length !== column.tvdM.length) throw new Error(`atTvd: the curve has ${curve.length} samples but the column ${column.tvdM.length}`);
+  if (curve.length !== column.tvdM.length)
+    throw new Error(`atTvd: the curve has ${curve.length} samples but the column ${column.tvdM.length}`);
   return onGrid(curve, tvdM);
 }
 
@@ -131,7 +132,8 @@ export function buildColumn(input: ColumnInput): PressureColumn {
   for (let i = 0; i < n; i++) tvdM[i] = i * p.stepM;
   const mudlineTvdM = airGapM + waterDepthM;
   const topTvdM = topTvdssM + airGapM;
-  if (!(topTvdM > mudlineTvdM)) throw new Error(`buildColumn: the top of overpressure (${topTvdM} m) must lie below the mudline (${mudlineTvdM} m)`);
+  if (!(topTvdM > mudlineTvdM))
+    throw new Error(`buildColumn: the top of overpressure (${topTvdM} m) must lie below the mudline (${mudlineTvdM} m)`);
   const firstSediment = Math.ceil(mudlineTvdM / p.stepM);
 
   const below = tvdM.map((z) => Math.max(0, z - mudlineTvdM));
@@ -178,7 +180,20 @@ export function buildColumn(input: ColumnInput): PressureColumn {
   }
   const porePa = poreFrom(s);
   const fracturePa = fractureEaton({ overburdenPa: s, porePa, poisson });
-  return { tvdM, mudlineTvdM, topTvdM, airGapM, waterDepthM, densityKgM3: density, porosity, poisson, overburdenPa: s, normalPa, porePa, fracturePa };
+  return {
+    tvdM,
+    mudlineTvdM,
+    topTvdM,
+    airGapM,
+    waterDepthM,
+    densityKgM3: density,
+    porosity,
+    poisson,
+    overburdenPa: s,
+    normalPa,
+    porePa,
+    fracturePa,
+  };
 }
 
 /**

@@ -87,6 +87,12 @@ export const demoProspects: readonly DemoProspect[] = SHAPES.map((s) => ({
   targetTvdssM: s.targetTvdssM,
   plannedWells: s.planned.map((p) => {
     const at = toLonLat(s.centreM.xM + p.dxM, s.centreM.yM + p.dyM);
-    return { name: p.name, lon: round6(at.lon), lat: round6(at.lat), targetTvdssM: p.targetTvdssM, tdTvdssM: s.targetTvdssM.base + TD_BELOW_TARGET_BASE_M };
+    return {
+      name: p.name,
+      lon: round6(at.lon),
+      lat: round6(at.lat),
+      targetTvdssM: p.targetTvdssM,
+      tdTvdssM: s.targetTvdssM.base + TD_BELOW_TARGET_BASE_M,
+    };
   }),
 }));

@@ -61,7 +61,10 @@ function wellRow(teamId: string, w: DemoWell) {
 }
 
 async function writeBasin(tx: Tx, teamId: string, demo: DemoWell[]): Promise<Omit<SeedDemoBasinResult, 'written' | 'ms'>> {
-  const ids = await tx.insert(wells).values(demo.map((w) => wellRow(teamId, w))).returning({ id: wells.id, name: wells.name });
+  const ids = await tx
+    .insert(wells)
+    .values(demo.map((w) => wellRow(teamId, w)))
+    .returning({ id: wells.id, name: wells.name });
   const idOf = new Map(ids.map((r) => [r.name, r.id]));
   const withId = demo.map((w) => ({ w, wellId: idOf.get(w.name)! }));
 

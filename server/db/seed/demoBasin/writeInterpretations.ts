@@ -33,7 +33,13 @@ export function demoTopPick(w: DemoWell): InterpretationContent['top'] {
   for (let i = 0; i < n; i++) {
     if (Number.isNaN(smoothed[i])) continue;
     const belowMudline = s.tvdM[i] - w.truth.column.mudlineTvdM;
-    pore[i] = eatonSonic({ overburdenPa: s.overburdenPa[i], normalPa: s.normalPa[i], normalSlowness: normalSlownessUsFt(belowMudline), observedSlowness: smoothed[i], exponent: DEMO_TRENDS.sonic.exponent });
+    pore[i] = eatonSonic({
+      overburdenPa: s.overburdenPa[i],
+      normalPa: s.normalPa[i],
+      normalSlowness: normalSlownessUsFt(belowMudline),
+      observedSlowness: smoothed[i],
+      exponent: DEMO_TRENDS.sonic.exponent,
+    });
   }
   const top = topOfOverpressure({
     tvdM: s.tvdM,

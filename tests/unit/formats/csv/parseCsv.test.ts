@@ -78,7 +78,9 @@ describe('parseCsv', () => {
   });
 
   it('reports an unclosed quote, text after a closing quote and an empty file', () => {
-    expect(parseCsv('a,b\n1,"open\n2,3\n').problems).toEqual([{ line: 2, message: 'a quoted field that starts on this line is never closed' }]);
+    expect(parseCsv('a,b\n1,"open\n2,3\n').problems).toEqual([
+      { line: 2, message: 'a quoted field that starts on this line is never closed' },
+    ]);
     const stray = parseCsv('a,b\n"x"y,2\n');
     expect(stray.problems).toEqual([{ line: 2, message: 'text after a closing quote; it is kept as part of the field' }]);
     expect(stray.rows[0].cells).toEqual(['xy', '2']);
@@ -101,23 +103,27 @@ describe('parseCsv', () => {
   it('matches d3-dsv on any table written by d3-dsv (property test), with exact start lines', () => {
     const cell = fc.oneof(fc.string(), fc.constantFrom('a,b', 'x"y', '"q"', 'l1\nl2', 'r\r\nn', ' ', '1,5'));
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 5 }), fc.array(fc.array(cell, { minLength: 5, maxLength: 5 }), { minLength: 1, maxLength: 8 }), (width, table) => {
-        const rows = table.map((r) => r.slice(0, width));
-        const header = Array.from({ length: width }, (_, k) => `h${k}`);
-        const text = dsvFormat(',').formatRows([header, ...rows]);
-        const csv = parseCsv(text, { delimiter: ',' });
-        const nonBlank = rows.filter((r) => r.some((c) => c.trim() !== ''));
-        expect(csv.rows.map((r) => r.cells)).toEqual(nonBlank);
-        // Each record starts one line after the previous record's last line break.
-        const formatted = rows.map((r) => dsvFormat(',').formatRows([r]));
-        let line = 2;
-        const starts = formatted.map((f) => {
-          const start = line;
-          line += (f.match(/\n/g)?.length ?? 0) + 1;
-          return start;
-        });
-        expect(csv.rows.map((r) => r.line)).toEqual(starts.filter((_, i) => rows[i].some((c) => c.trim() !== '')));
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 5 }),
+        fc.array(fc.array(cell, { minLength: 5, maxLength: 5 }), { minLength: 1, maxLength: 8 }),
+        (width, table) => {
+          const rows = table.map((r) => r.slice(0, width));
+          const header = Array.from({ length: width }, (_, k) => `h${k}`);
+          const text = dsvFormat(',').formatRows([header, ...rows]);
+          const csv = parseCsv(text, { delimiter: ',' });
+          const nonBlank = rows.filter((r) => r.some((c) => c.trim() !== ''));
+          expect(csv.rows.map((r) => r.cells)).toEqual(nonBlank);
+          // Each record starts one line after the previous record's last line break.
+          const formatted = rows.map((r) => dsvFormat(',').formatRows([r]));
+          let line = 2;
+          const starts = formatted.map((f) => {
+            const start = line;
+            line += (f.match(/\n/g)?.length ?? 0) + 1;
+            return start;
+          });
+          expect(csv.rows.map((r) => r.line)).toEqual(starts.filter((_, i) => rows[i].some((c) => c.trim() !== '')));
+        },
+      ),
       { numRuns: 300 },
     );
   });

@@ -36,11 +36,21 @@ describe('suggestMapping', () => {
       { column: 'comment', field: null },
     ]);
     expect(suggestMapping(header, FIELDS)).toEqual({
-      'Well Name': 'well', 'MD (ft)': 'md', 'True_Vertical_Depth [m]': 'tvd', 'Pressure [psi]': 'pressure', 'EMW ppg': 'emw', comment: null,
+      'Well Name': 'well',
+      'MD (ft)': 'md',
+      'True_Vertical_Depth [m]': 'tvd',
+      'Pressure [psi]': 'pressure',
+      'EMW ppg': 'emw',
+      comment: null,
     });
   });
 
   it('prefers the whole header when it is an alias, and gives each field to the first column only', () => {
-    expect(suggestMapping(['md_rkb', 'depth_m', 'Druck [bar]', 'pp'], FIELDS)).toEqual({ md_rkb: 'md', depth_m: null, 'Druck [bar]': 'pressure', pp: null });
+    expect(suggestMapping(['md_rkb', 'depth_m', 'Druck [bar]', 'pp'], FIELDS)).toEqual({
+      md_rkb: 'md',
+      depth_m: null,
+      'Druck [bar]': 'pressure',
+      pp: null,
+    });
   });
 });

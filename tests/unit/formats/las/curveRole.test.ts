@@ -5,13 +5,31 @@ import { normaliseDepthUnit, suggestCurveRole } from '@shared/formats/las';
 // example mnemonics and units are those of the CWLS LAS 2.0 standard's own ~C example (§5.5).
 describe('suggestCurveRole', () => {
   it.each([
-    ['DT', 'US/M', 'sonic'], ['DTC', 'us/ft', 'sonic'], ['DTCO', 'US/F', 'sonic'], ['AC', 'us/ft', 'sonic'],
-    ['RES', 'OHMM', 'resistivity'], ['RT', 'ohmm', 'resistivity'], ['ILD', 'OHMM', 'resistivity'], ['LLD', 'OHMM', 'resistivity'],
-    ['RDEP', 'ohm.m', 'resistivity'], ['AT90', 'OHMM', 'resistivity'], ['MSFL', 'OHMM', 'resistivity'],
-    ['RHOB', 'K/M3', 'density'], ['DEN', 'g/cc', 'density'], ['ZDEN', 'G/C3', 'density'],
-    ['GR', 'GAPI', 'gamma'], ['SGR', 'GAPI', 'gamma'], ['CALI', 'MM', 'caliper'], ['HCAL', 'IN', 'caliper'],
-    ['NPHI', 'V/V', 'neutron'], ['TNPH', 'PU', 'neutron'], ['PHIE', 'V/V', 'porosity'], ['DPHI', 'V/V', 'porosity'],
-    ['SP', 'MV', 'other'], ['DTSM', 'us/ft', 'other'], ['DRHO', 'G/CC', 'other'],
+    ['DT', 'US/M', 'sonic'],
+    ['DTC', 'us/ft', 'sonic'],
+    ['DTCO', 'US/F', 'sonic'],
+    ['AC', 'us/ft', 'sonic'],
+    ['RES', 'OHMM', 'resistivity'],
+    ['RT', 'ohmm', 'resistivity'],
+    ['ILD', 'OHMM', 'resistivity'],
+    ['LLD', 'OHMM', 'resistivity'],
+    ['RDEP', 'ohm.m', 'resistivity'],
+    ['AT90', 'OHMM', 'resistivity'],
+    ['MSFL', 'OHMM', 'resistivity'],
+    ['RHOB', 'K/M3', 'density'],
+    ['DEN', 'g/cc', 'density'],
+    ['ZDEN', 'G/C3', 'density'],
+    ['GR', 'GAPI', 'gamma'],
+    ['SGR', 'GAPI', 'gamma'],
+    ['CALI', 'MM', 'caliper'],
+    ['HCAL', 'IN', 'caliper'],
+    ['NPHI', 'V/V', 'neutron'],
+    ['TNPH', 'PU', 'neutron'],
+    ['PHIE', 'V/V', 'porosity'],
+    ['DPHI', 'V/V', 'porosity'],
+    ['SP', 'MV', 'other'],
+    ['DTSM', 'us/ft', 'other'],
+    ['DRHO', 'G/CC', 'other'],
   ] as const)('%s [%s] → %s', (mnemonic, unit, role) => {
     expect(suggestCurveRole(mnemonic, unit)).toBe(role);
   });

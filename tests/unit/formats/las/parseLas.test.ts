@@ -16,11 +16,34 @@ describe('parseLas on well-formed files', () => {
     expect(las.version).toBe(2);
     expect(las.wrap).toBe('NO');
     expect(las.well).toMatchObject({
-      STRT: 1500, STOP: 1502, STEP: 0.5, NULL: -999.25,
-      COMP: 'SYNTHETIC SURVEY CO', WELL: 'KESTREL-3', FLD: 'GREYFEN', LOC: 'BLOCK Q-17', PROV: 'NORTHMARCH',
-      SRVC: 'SYNTHETIC WIRELINE SERVICES', DATE: '2024-03-14', UWI: '100000000000W500', API: '',
+      STRT: 1500,
+      STOP: 1502,
+      STEP: 0.5,
+      NULL: -999.25,
+      COMP: 'SYNTHETIC SURVEY CO',
+      WELL: 'KESTREL-3',
+      FLD: 'GREYFEN',
+      LOC: 'BLOCK Q-17',
+      PROV: 'NORTHMARCH',
+      SRVC: 'SYNTHETIC WIRELINE SERVICES',
+      DATE: '2024-03-14',
+      UWI: '100000000000W500',
+      API: '',
     });
-    expect(las.well.items.map((i) => i.mnemonic)).toEqual(['STRT', 'STOP', 'STEP', 'NULL', 'COMP', 'WELL', 'FLD', 'LOC', 'PROV', 'SRVC', 'DATE', 'UWI']);
+    expect(las.well.items.map((i) => i.mnemonic)).toEqual([
+      'STRT',
+      'STOP',
+      'STEP',
+      'NULL',
+      'COMP',
+      'WELL',
+      'FLD',
+      'LOC',
+      'PROV',
+      'SRVC',
+      'DATE',
+      'UWI',
+    ]);
     expect(las.well.items[0]).toEqual({ mnemonic: 'STRT', unit: 'M', value: '1500.0000', description: 'START DEPTH', line: 7 });
 
     expect(las.index).toMatchObject({ mnemonic: 'DEPT', unit: 'm', rawUnit: 'M', description: '1 DEPTH' });
@@ -43,7 +66,15 @@ describe('parseLas on well-formed files', () => {
     const las = parseLas(fixtureText('las', 'feet-negative-step.las'));
     expect(las.errors).toEqual([]);
     expect(las.warnings).toEqual([]);
-    expect(las.well).toMatchObject({ STRT: 5010, STOP: 5000, STEP: -2.5, CNTY: 'ASHDOWN', STAT: 'WESTREACH', CTRY: 'ERIDANIA', API: '00-000-00000' });
+    expect(las.well).toMatchObject({
+      STRT: 5010,
+      STOP: 5000,
+      STEP: -2.5,
+      CNTY: 'ASHDOWN',
+      STAT: 'WESTREACH',
+      CTRY: 'ERIDANIA',
+      API: '00-000-00000',
+    });
     expect(las.index).toMatchObject({ unit: 'ft', rawUnit: 'F' });
     expect(arr(las.index.values)).toEqual([5000, 5002.5, 5005, 5007.5, 5010]);
     // 1 ft = 0.3048 m exactly (International Yard and Pound Agreement, 1959): 5000 ft = 1524 m.
@@ -76,9 +107,7 @@ describe('parseLas on well-formed files', () => {
   it('reads ~P and ~O, skips comment lines and renames repeated mnemonics GR:1, GR:2', () => {
     const las = parseLas(fixtureText('las', 'params-other-comments.las'));
     expect(las.errors).toEqual([]);
-    expect(las.warnings).toEqual([
-      { line: 23, message: 'curve mnemonic GR appears 2 times (lines 23, 24); renamed GR:1, GR:2' },
-    ]);
+    expect(las.warnings).toEqual([{ line: 23, message: 'curve mnemonic GR appears 2 times (lines 23, 24); renamed GR:1, GR:2' }]);
     expect(las.curves.map((c) => c.mnemonic)).toEqual(['GR:1', 'GR:2', 'DTCO']);
     expect(arr(las.curves[1].values)).toEqual([71.5, 72.8, 74.4]);
     expect(las.well.DATE).toBe('2024-03-14 10:42:00');
@@ -100,7 +129,13 @@ describe('parseLas on well-formed files', () => {
     expect(las.errors).toEqual([]);
     expect(las.warnings).toEqual([{ line: 2, message: 'LAS 1.2 file: read as LAS 2.0, best effort' }]);
     expect(las.version).toBe(1.2);
-    expect(las.well).toMatchObject({ COMP: 'SYNTHETIC SURVEY CO', WELL: 'KESTREL-2', DATE: '25-DEC-88', UWI: '100000000002W500', NULL: -999.25 });
+    expect(las.well).toMatchObject({
+      COMP: 'SYNTHETIC SURVEY CO',
+      WELL: 'KESTREL-2',
+      DATE: '25-DEC-88',
+      UWI: '100000000002W500',
+      NULL: -999.25,
+    });
     expect(arr(las.index.values)).toEqual([1669.75, 1669.875, 1670]);
   });
 

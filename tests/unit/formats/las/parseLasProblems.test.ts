@@ -88,7 +88,8 @@ describe('parseLas reports problems with their line', () => {
       {
         line: 8,
         column: 'NULL',
-        message: "the file's NULL is -999.25 but its data uses -9999 for gaps (9 samples of GR, RHOB, first at line 25); correct NULL in ~W",
+        message:
+          "the file's NULL is -999.25 but its data uses -9999 for gaps (9 samples of GR, RHOB, first at line 25); correct NULL in ~W",
       },
     ]);
     expect(result.warnings).toEqual([]);
@@ -125,7 +126,9 @@ describe('parseLas reports problems with their line', () => {
     expect(parseLas(withData('100 1').replace('WRAP.   NO ', 'WRAP.   MAYBE')).errors).toEqual([
       { line: 3, message: "WRAP must be YES or NO, found 'MAYBE'" },
     ]);
-    expect(parseLas(withData('100 1').replace('VERS.   2.0', 'VERS.   4.0')).errors).toEqual([{ line: 2, message: "VERS '4.0' is not 2.0" }]);
+    expect(parseLas(withData('100 1').replace('VERS.   2.0', 'VERS.   4.0')).errors).toEqual([
+      { line: 2, message: "VERS '4.0' is not 2.0" },
+    ]);
   });
 
   it('STRT and STOP that do not match the data', () => {
@@ -166,7 +169,9 @@ describe('parseLas reports problems with their line', () => {
   });
 
   it('a missing NULL (−999.25 assumed) and missing required ~W items', () => {
-    const text = withData('100 -999.25', '100.5 2', '101 3').replace('NULL.    -999.25 : NULL VALUE\n', '').replace('UWI . 100000000000W500 : UNIQUE WELL ID\n', '');
+    const text = withData('100 -999.25', '100.5 2', '101 3')
+      .replace('NULL.    -999.25 : NULL VALUE\n', '')
+      .replace('UWI . 100000000000W500 : UNIQUE WELL ID\n', '');
     const result = parseLas(text);
     expect(result.warnings).toEqual([
       { line: 4, message: 'NULL is missing from ~W; -999.25 assumed' },
@@ -177,8 +182,22 @@ describe('parseLas reports problems with their line', () => {
 
   it('WRAP YES records with too many values or cut short', () => {
     // ~A on line 21; records start on lines 22, 24, 27 and 29.
-    const text = [...HEADER.slice(0, 2), 'WRAP.   YES : MULTIPLE LINES', ...HEADER.slice(3), 'RHOB.G/CC : DENSITY', '~A',
-      '100.0', '80 2.3', '100.5', '81', '2.31 7', '101.0', '82 2.32', '101.5', '83'].join('\n');
+    const text = [
+      ...HEADER.slice(0, 2),
+      'WRAP.   YES : MULTIPLE LINES',
+      ...HEADER.slice(3),
+      'RHOB.G/CC : DENSITY',
+      '~A',
+      '100.0',
+      '80 2.3',
+      '100.5',
+      '81',
+      '2.31 7',
+      '101.0',
+      '82 2.32',
+      '101.5',
+      '83',
+    ].join('\n');
     const result = parseLas(text);
     expect(result.errors).toEqual([
       { line: 26, message: 'expected 2 values after the index 100.5 (line 24), found 3' },

@@ -41,7 +41,9 @@ ${params ? `~PARAMETER INFORMATION\n${params}\n` : ''}~CURVE INFORMATION
 
 describe('readLasLocation', () => {
   it('reads LATI/LONG from ~W with their lines, and EKB/EGL from ~P in metres', () => {
-    const las = parseLas(file(' LATI.DEG  -32.25 : LATITUDE\n LONG.DEG  101.5 W : LONGITUDE', ' EKB .FT  100 : KB\n EGL .M  12.5 : GROUND'));
+    const las = parseLas(
+      file(' LATI.DEG  -32.25 : LATITUDE\n LONG.DEG  101.5 W : LONGITUDE', ' EKB .FT  100 : KB\n EGL .M  12.5 : GROUND'),
+    );
     const loc = readLasLocation(las);
     expect(loc.problems).toEqual([]);
     expect(loc.lat).toEqual({ mnemonic: 'LATI', value: -32.25, line: 10 });
@@ -52,7 +54,9 @@ describe('readLasLocation', () => {
   });
 
   it('reads LAT/LON from ~P, ignores a bare label, and names an unreadable item by line', () => {
-    const las = parseLas(file(' LATI.DEG   : LATITUDE', ' LAT .DEG  12.5 : LATITUDE\n LON .DEG  abc : LONGITUDE\n EDF .  30 : DRILL FLOOR'));
+    const las = parseLas(
+      file(' LATI.DEG   : LATITUDE', ' LAT .DEG  12.5 : LATITUDE\n LON .DEG  abc : LONGITUDE\n EDF .  30 : DRILL FLOOR'),
+    );
     const loc = readLasLocation(las);
     expect(loc.lat).toEqual({ mnemonic: 'LAT', value: 12.5, line: 12 });
     expect(loc.lon).toBeNull();

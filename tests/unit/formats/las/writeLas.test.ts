@@ -81,16 +81,42 @@ describe('writeLas', () => {
 
   it('refuses what LAS 2.0 cannot hold, with an exact message', () => {
     const index = { unit: 'm' as const, values: [1, 2, 3] };
-    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', values: [1, 2] }] })).toThrow('writeLas: curve GR has 2 values but the index has 3');
-    expect(() => writeLas({ index: { unit: 'm', values: [1, 3, 2] }, curves: [] })).toThrow('writeLas: the index must be strictly increasing or decreasing (row 2)');
-    expect(() => writeLas({ index: { unit: 'm', values: [1, NaN] }, curves: [] })).toThrow('writeLas: index value NaN at row 1 is not a finite number');
-    expect(() => writeLas({ index: { unit: null, values: [1] }, curves: [] })).toThrow("writeLas: the index unit must be 'm' or 'ft', got null");
-    expect(() => writeLas({ index, curves: [{ mnemonic: 'G R', values: [1, 2, 3] }] })).toThrow("writeLas: mnemonic 'G R' must be non-empty, without spaces, dots or colons");
-    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', values: [1, 2, 3] }, { mnemonic: 'GR', values: [1, 2, 3] }] })).toThrow("writeLas: curve mnemonic 'GR' is used twice");
-    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', description: 'a: b', values: [1, 2, 3] }] })).toThrow('writeLas: the description of curve GR must not contain a colon');
-    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', values: [1, Infinity, 3] }] })).toThrow('writeLas: curve GR has a non-finite value Infinity at row 1');
-    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', values: [1, -999.25, 3] }] })).toThrow('writeLas: curve GR holds the NULL value -999.25 at row 1; choose another NULL');
-    expect(() => writeLas({ index, curves: [], other: '~A sneaky' })).toThrow("writeLas: a line of other must not start with ~ or #: '~A sneaky'");
+    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', values: [1, 2] }] })).toThrow(
+      'writeLas: curve GR has 2 values but the index has 3',
+    );
+    expect(() => writeLas({ index: { unit: 'm', values: [1, 3, 2] }, curves: [] })).toThrow(
+      'writeLas: the index must be strictly increasing or decreasing (row 2)',
+    );
+    expect(() => writeLas({ index: { unit: 'm', values: [1, NaN] }, curves: [] })).toThrow(
+      'writeLas: index value NaN at row 1 is not a finite number',
+    );
+    expect(() => writeLas({ index: { unit: null, values: [1] }, curves: [] })).toThrow(
+      "writeLas: the index unit must be 'm' or 'ft', got null",
+    );
+    expect(() => writeLas({ index, curves: [{ mnemonic: 'G R', values: [1, 2, 3] }] })).toThrow(
+      "writeLas: mnemonic 'G R' must be non-empty, without spaces, dots or colons",
+    );
+    expect(() =>
+      writeLas({
+        index,
+        curves: [
+          { mnemonic: 'GR', values: [1, 2, 3] },
+          { mnemonic: 'GR', values: [1, 2, 3] },
+        ],
+      }),
+    ).toThrow("writeLas: curve mnemonic 'GR' is used twice");
+    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', description: 'a: b', values: [1, 2, 3] }] })).toThrow(
+      'writeLas: the description of curve GR must not contain a colon',
+    );
+    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', values: [1, Infinity, 3] }] })).toThrow(
+      'writeLas: curve GR has a non-finite value Infinity at row 1',
+    );
+    expect(() => writeLas({ index, curves: [{ mnemonic: 'GR', values: [1, -999.25, 3] }] })).toThrow(
+      'writeLas: curve GR holds the NULL value -999.25 at row 1; choose another NULL',
+    );
+    expect(() => writeLas({ index, curves: [], other: '~A sneaky' })).toThrow(
+      "writeLas: a line of other must not start with ~ or #: '~A sneaky'",
+    );
   });
 });
 
