@@ -12,7 +12,8 @@ import { readOrCreateSecret } from './setup/secrets.mjs';
 import { run, say, fail, ROOT } from './setup/proc.mjs';
 
 const mode = process.argv[2] ?? 'start';
-if (!['start', 'dev', 'test', 'seed', 'bench', 'admin', 'mail'].includes(mode)) fail(`Unknown mode "${mode}" (start, dev, test, seed, bench, admin, mail).`);
+if (!['start', 'dev', 'test', 'seed', 'bench', 'admin', 'mail'].includes(mode))
+  fail(`Unknown mode "${mode}" (start, dev, test, seed, bench, admin, mail).`);
 
 const tsx = join(ROOT, 'node_modules', '.bin', 'tsx');
 
@@ -86,7 +87,8 @@ async function runApp() {
     cleanUp();
     return;
   }
-  if (mode === 'start') await run(join(ROOT, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { env, label: 'client build' });
+  if (mode === 'start')
+    await run(join(ROOT, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { env, label: 'client build' });
 
   const children = [];
   const launch = (args, label, extraEnv = {}) => {
@@ -145,9 +147,10 @@ async function withThrowawayDatabase(fn) {
   }
 }
 
-/** Typecheck, build, then every vitest project on a throwaway database; the exit code is vitest's. */
+/** Lint, typecheck, build, then every vitest project on a throwaway database; the exit code is vitest's. */
 async function runTests() {
   ensureChromium();
+  await run('npm', ['run', '--silent', 'lint'], { label: 'lint' });
   await run('npm', ['run', '--silent', 'typecheck'], { label: 'typecheck' });
   process.exitCode = await withThrowawayDatabase(async (env) => {
     await run(join(ROOT, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { env, label: 'client build' });

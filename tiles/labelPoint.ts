@@ -19,7 +19,9 @@ const MAX_RING_VERTICES = 400;
  */
 export function labelPoint(rings: readonly Position[][]): [number, number] {
   if (rings.length === 0 || rings[0].length < 4) throw new Error('labelPoint: the polygon needs an exterior ring of at least 4 positions.');
-  let [west, south, east, north] = bbox(rings[0]);
+  const box = bbox(rings[0]);
+  const [, , east, north] = box;
+  let [west, south] = box;
   const k = Math.cos((((south + north) / 2) * Math.PI) / 180);
   const plane = rings.map((r) => {
     const step = Math.max(1, Math.ceil(r.length / MAX_RING_VERTICES));

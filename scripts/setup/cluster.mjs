@@ -19,7 +19,20 @@ function pg(cmd, args, opts) {
 }
 
 function psql(dir, port, db, sqlText) {
-  return mustRun(join(PG_BIN, 'psql'), ['-h', dir, '-p', String(port), '-U', 'postgres', '-d', db, '-v', 'ON_ERROR_STOP=1', '-tAc', sqlText]).trim();
+  return mustRun(join(PG_BIN, 'psql'), [
+    '-h',
+    dir,
+    '-p',
+    String(port),
+    '-U',
+    'postgres',
+    '-d',
+    db,
+    '-v',
+    'ON_ERROR_STOP=1',
+    '-tAc',
+    sqlText,
+  ]).trim();
 }
 
 export async function freePort() {
@@ -50,7 +63,7 @@ export async function startPrivateCluster({ dir, port, throwaway }) {
   mkdirSync(parent, { recursive: true });
   chmodSync(parent, 0o755); // the postgres OS user must be able to reach its folder
   const password = readOrCreateSecret(join(parent, 'pg-password'), 24);
-  if ((join(dir, `.s.PGSQL.${port}`)).length > 100) {
+  if (join(dir, `.s.PGSQL.${port}`).length > 100) {
     throw new Error(`The data folder path is too long for a PostgreSQL socket (${dir}); set PORELITH_DATA to a shorter path.`);
   }
   if (!existsSync(join(dir, 'PG_VERSION'))) {
@@ -61,7 +74,18 @@ export async function startPrivateCluster({ dir, port, throwaway }) {
     const pwfile = join(parent, '.pwfile');
     writeFileSync(pwfile, password + '\n', { mode: 0o644 });
     try {
-      pg('initdb', ['-D', dir, '-U', 'postgres', '--auth-local=trust', '--auth-host=scram-sha-256', `--pwfile=${pwfile}`, '-E', 'UTF8', '--locale=C.UTF-8']);
+      pg('initdb', [
+        '-D',
+        dir,
+        '-U',
+        'postgres',
+        '--auth-local=trust',
+        '--auth-host=scram-sha-256',
+        `--pwfile=${pwfile}`,
+        '-E',
+        'UTF8',
+        '--locale=C.UTF-8',
+      ]);
     } finally {
       rmSync(pwfile, { force: true });
     }
@@ -77,8 +101,10 @@ export async function startPrivateCluster({ dir, port, throwaway }) {
     try {
       pg('pg_ctl', ['-D', dir, '-l', join(dir, 'server.log'), '-w', '-t', '60', '-o', opts.join(' '), 'start']);
     } catch (err) {
-      const log = existsSync(join(dir, 'server.log')) ? readFileSync(join(dir, 'server.log'), 'utf8').split('\n').slice(-15).join('\n') : '';
-      throw new Error(`${err.message}\n${log}`);
+      const log = existsSync(join(dir, 'server.log'))
+        ? readFileSync(join(dir, 'server.log'), 'utf8').split('\n').slice(-15).join('\n')
+        : '';
+      throw new Error(`${err.message}\n${log}`, { cause: err });
     }
     say(`PostgreSQL listening on 127.0.0.1:${port}`);
   }

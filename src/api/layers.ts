@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { referenceLayerSchema, type ReferenceLayer } from '@shared/schemas/planning';
-import { api, ApiClientError, postMultipart, type ApiClient } from './client';
+import { api, postMultipart, type ApiClient } from './client';
 
 const layersPath = (teamId: string) => `/api/teams/${encodeURIComponent(teamId)}/layers`;
 

@@ -35,9 +35,10 @@ export function gibsonByFiniteDifference(targetT: number, cells = 800, maxStep =
     for (let j = 0; j < nodes; j++) {
       const xi = j * h;
       let lo = 0;
-      let up = 0;
-      let di = -2 * D / (h * h) - 1;
-      if (j === 0) up = (2 * D) / (h * h); // mirror node for the no-flow base
+      let up: number;
+      const di = (-2 * D) / (h * h) - 1;
+      if (j === 0)
+        up = (2 * D) / (h * h); // mirror node for the no-flow base
       else {
         lo = D / (h * h) - xi / (2 * h);
         up = D / (h * h) + xi / (2 * h);
