@@ -34,16 +34,55 @@ function validateBins(experimental: readonly VariogramLag[], minimum: number): B
 }
 
 /**
- * Weights N(h)/γ̂(h)² from the experimental semivariances (floored so an empty-variance bin stays finite).
- * Cressie (1985) writes the weight with the model γ(h); with the model in the denominator the criterion favours
- * models that overshoot the small short-lag semivariances (a model above γ̂ costs at most N per bin, one below it
- * costs without bound), which on smooth surfaces gave ranges far past the data and kriging standard deviations
- * several times the cross-validation errors. The experimental form is the usual one-step variant.
+ * Weights N(h)/γ(h)² with γ a semivariance per bin (Cressie 1985): the model's, once there is a model, floored so
+ * a zero bin stays finite.
  */
-function weightsOf(b: Bins, floor: number): Float64Array {
-  const w = new Float64Array(b.h.length);
-  for (let j = 0; j < w.length; j++) w[j] = b.pairs[j] / Math.max(b.gamma[j] * b.gamma[j], floor);
+function weightsOf(pairs: Float64Array, gamma: ArrayLike<number>, floor: number): Float64Array {
+  const w = new Float64Array(pairs.length);
+  for (let j = 0; j < w.length; j++) w[j] = pairs[j] / Math.max(gamma[j] * gamma[j], floor);
   return w;
+}
+
+/**
+ * Merges neighbouring bins until each holds at least `minPairs` pairs (pair-weighted mean lag and semivariance), so a
+ * bin of one or two pairs cannot steer the fit; the threshold is halved while fewer than `minimum` bins would remain.
+ */
+function mergeSparse(b: Bins, minPairs: number, minimum: number): Bins {
+  for (let threshold = minPairs; threshold > 1; threshold = Math.floor(threshold / 2)) {
+    const h: number[] = [];
+    const g: number[] = [];
+    const p: number[] = [];
+    let sh = 0,
+      sg = 0,
+      sp = 0;
+    for (let j = 0; j < b.h.length; j++) {
+      sh += b.h[j] * b.pairs[j];
+      sg += b.gamma[j] * b.pairs[j];
+      sp += b.pairs[j];
+      if (sp >= threshold) {
+        h.push(sh / sp);
+        g.push(sg / sp);
+        p.push(sp);
+        sh = sg = sp = 0;
+      }
+    }
+    if (sp > 0) {
+      if (p.length === 0) {
+        h.push(sh / sp);
+        g.push(sg / sp);
+        p.push(sp);
+      } else {
+        // the sparse tail joins the last full bin
+        const k = p.length - 1;
+        const total = p[k] + sp;
+        h[k] = (h[k] * p[k] + sh) / total;
+        g[k] = (g[k] * p[k] + sg) / total;
+        p[k] = total;
+      }
+    }
+    if (p.length >= minimum) return { h: Float64Array.from(h), gamma: Float64Array.from(g), pairs: Float64Array.from(p) };
+  }
+  return b;
 }
 
 /** Weighted residual sum of squares Σ wⱼ·(γ̂ⱼ − γⱼ)². */
@@ -84,26 +123,51 @@ function fitLinear(b: Bins, w: Float64Array, shape: Float64Array, fixedNugget: n
 /** Least share of the total sill a fitted gaussian keeps as nugget (common practice, no source). */
 export const GAUSSIAN_NUGGET_SHARE = 0.01;
 
+/** Fewest pairs a bin keeps before it is merged with its neighbour (common practice, no source). */
+export const MIN_PAIRS_PER_BIN = 6;
+
+const MAX_REWEIGHTS = 30;
+
+export interface VariogramFit {
+  variogram: Variogram;
+  /**
+   * Where the practical range ended: 'upper' on the largest lag (the semivariance still rises there, the sign of a
+   * trend or of correlation longer than the data span), 'lower' on the shortest bound (in effect a pure nugget: no
+   * correlation at the well spacing), null inside.
+   */
+  rangeAtBound: 'lower' | 'upper' | null;
+  /** The bins fitted, after sparse ones were merged. */
+  bins: VariogramLag[];
+  /** Reweighting passes until the weights stopped moving. */
+  iterations: number;
+}
+
 /**
- * Fits a variogram model to an experimental variogram by weighted least squares with weights N(h)/γ̂(h)², pair count
- * over squared semivariance (Cressie 1985, "Fitting variogram models by weighted least squares", Mathematical
- * Geology 17(5), 563–586 — volume and pages from memory; see weightsOf for why γ̂ rather than the model γ).
- * The practical range is bounded by the largest lag given: choose the lags (about half the largest separation).
- * GSLIB convention: `range` is the practical range, `sill` the partial sill. Own fitter because no maintained npm package fits these models: the range is
- * searched on a log grid and refined by golden section, with nugget and sill solved exactly for each range.
+ * Fits a variogram model to an experimental variogram by iteratively reweighted least squares with Cressie's weights
+ * N(h)/γ(h)², pair count over the squared model semivariance (Cressie 1985, "Fitting variogram models by weighted
+ * least squares", Mathematical Geology 17(5), 563–586 — volume and pages from memory). The weights start from the
+ * experimental γ̂ and are then recomputed from the last fit until they settle: the fixed point solves Cressie's
+ * estimating equation Σ N·(γ̂ − γ)·∂γ/γ² = 0 without the upward pull of minimising his criterion with γ free in the
+ * denominator, and — unlike weights from γ̂ alone — a distant bin whose γ̂ the model misses keeps its weight, so
+ * the sill follows the large lags. Bins with fewer than MIN_PAIRS_PER_BIN pairs are merged with their neighbour.
+ * The practical range is bounded by the largest lag given (choose lags up to about half the largest separation);
+ * `rangeAtBound` says when the fit ends on a bound. GSLIB convention: `range` is the practical range, `sill` the
+ * partial sill. Own fitter because no maintained npm package fits these models: the range is searched on a log grid
+ * and refined by golden section, with nugget and sill solved exactly for each range.
  *
  * @example
  * const lags = [10, 20, 30, 40, 60].map((h) => ({ lagM: h, gamma: 2 + 8 * (1 - Math.exp(-3 * h / 50)), pairs: 30 }));
- * fitVariogram(lags, { model: 'exponential' }); // ≈ { model: 'exponential', nugget: 2, sill: 8, range: 50 }
+ * fitVariogramDetailed(lags, { model: 'exponential' }).variogram; // ≈ { model: 'exponential', nugget: 2, sill: 8, range: 50 }
  */
-export function fitVariogram(experimental: readonly VariogramLag[], options: FitVariogramOptions): Variogram {
+export function fitVariogramDetailed(experimental: readonly VariogramLag[], options: FitVariogramOptions): VariogramFit {
   const model = options?.model;
   if (!VARIOGRAM_MODELS.includes(model)) throw new Error(`Unknown variogram model: ${String(model)}`);
   const fixedNugget = options.nugget;
   if (fixedNugget !== undefined && (!Number.isFinite(fixedNugget) || fixedNugget < 0)) {
     throw new Error(`nugget must be a finite number ≥ 0, got ${String(fixedNugget)}`);
   }
-  const bins = validateBins(experimental, fixedNugget === undefined ? 3 : 2);
+  const minimum = fixedNugget === undefined ? 3 : 2;
+  const bins = mergeSparse(validateBins(experimental, minimum), MIN_PAIRS_PER_BIN, minimum);
   let maxGamma = 0;
   let hMin = Infinity;
   let hMax = 0;
@@ -114,26 +178,66 @@ export function fitVariogram(experimental: readonly VariogramLag[], options: Fit
   }
   if (maxGamma === 0) throw new Error('fitVariogram: every semivariance is zero, so there is nothing to fit');
   // keeps Cressie weights finite where a model (or a bin) is zero
-  const floor = (maxGamma * 1e-9) ** 2;
-  const shape = new Float64Array(bins.h.length);
+  const floor = (maxGamma * 1e-6) ** 2;
+  const lo = Math.log(hMin / 4);
+  // Bounded by the largest lag used: past it the data say nothing about the range, and a longer range only
+  // stretches the model's slope at short lags (common practice, no source).
+  const hi = Math.log(hMax);
+  const step = (hi - lo) / GRID_STEPS;
 
-  const weights = weightsOf(bins, floor);
-  const evaluate = (logRange: number): { score: number; nugget: number; sill: number } => {
+  let weights = weightsOf(bins.pairs, bins.gamma, floor);
+  let best = fitWithWeights(bins, weights, model, fixedNugget, lo, hi);
+  let iterations = 0;
+  while (iterations < MAX_REWEIGHTS) {
+    iterations++;
+    const modelGamma = bins.h.map((h) => best.nugget + best.sill * modelShape(model, h, Math.exp(best.logRange)));
+    weights = weightsOf(bins.pairs, modelGamma, floor);
+    const next = fitWithWeights(bins, weights, model, fixedNugget, lo, hi);
+    const moved =
+      Math.abs(next.logRange - best.logRange) + Math.abs(next.nugget - best.nugget) / maxGamma + Math.abs(next.sill - best.sill) / maxGamma;
+    best = next;
+    if (moved < 1e-9) break;
+  }
+  const rangeAtBound = hi - best.logRange < step ? 'upper' : best.logRange - lo < step ? 'lower' : null;
+  return {
+    variogram: { model, nugget: best.nugget, sill: best.sill, range: Math.exp(best.logRange) },
+    rangeAtBound,
+    bins: Array.from(bins.h, (lagM, j) => ({ lagM, gamma: bins.gamma[j], pairs: bins.pairs[j] })),
+    iterations,
+  };
+}
+
+/**
+ * The fitted model alone; see fitVariogramDetailed.
+ * @example
+ * const lags = [10, 20, 30, 40, 60].map((h) => ({ lagM: h, gamma: 2 + 8 * (1 - Math.exp(-3 * h / 50)), pairs: 30 }));
+ * fitVariogram(lags, { model: 'exponential' }); // ≈ { model: 'exponential', nugget: 2, sill: 8, range: 50 }
+ */
+export function fitVariogram(experimental: readonly VariogramLag[], options: FitVariogramOptions): Variogram {
+  return fitVariogramDetailed(experimental, options).variogram;
+}
+
+/** The best range for fixed weights: a log grid, then golden section between the best point's neighbours. */
+function fitWithWeights(
+  bins: Bins,
+  weights: Float64Array,
+  model: VariogramModel,
+  fixedNugget: number | undefined,
+  lo: number,
+  hi: number,
+): { logRange: number; score: number; nugget: number; sill: number } {
+  const shape = new Float64Array(bins.h.length);
+  const evaluate = (logRange: number): { logRange: number; score: number; nugget: number; sill: number } => {
     const range = Math.exp(logRange);
     for (let j = 0; j < shape.length; j++) shape[j] = modelShape(model, bins.h[j], range);
     const { nugget, sill } = fitLinear(bins, weights, shape, fixedNugget);
     if (model === 'gaussian' && fixedNugget === undefined && nugget < GAUSSIAN_NUGGET_SHARE * (nugget + sill)) {
       // The smooth gaussian without a nugget makes the kriging system nearly singular; a small nugget keeps it solvable.
       const held = fitLinear(bins, weights, shape, GAUSSIAN_NUGGET_SHARE * (nugget + sill));
-      return { score: criterion(bins, weights, shape, held.nugget, held.sill), nugget: held.nugget, sill: held.sill };
+      return { logRange, score: criterion(bins, weights, shape, held.nugget, held.sill), nugget: held.nugget, sill: held.sill };
     }
-    return { score: criterion(bins, weights, shape, nugget, sill), nugget, sill };
+    return { logRange, score: criterion(bins, weights, shape, nugget, sill), nugget, sill };
   };
-
-  const lo = Math.log(hMin / 4);
-  // Bounded by the largest lag used: past it the data say nothing about the range, and a longer range only
-  // stretches the model's slope at short lags (common practice, no source).
-  const hi = Math.log(hMax);
   const step = (hi - lo) / GRID_STEPS;
   let bestI = 0;
   let bestScore = Infinity;
@@ -144,7 +248,6 @@ export function fitVariogram(experimental: readonly VariogramLag[], options: Fit
       bestI = i;
     }
   }
-  // golden-section refinement between the grid neighbours of the best grid point
   let a = lo + Math.max(0, bestI - 1) * step;
   let b = lo + Math.min(GRID_STEPS, bestI + 1) * step;
   const g = (Math.sqrt(5) - 1) / 2;
@@ -167,9 +270,7 @@ export function fitVariogram(experimental: readonly VariogramLag[], options: Fit
       fd = evaluate(d).score;
     }
   }
-  const candidates = [lo + bestI * step, (a + b) / 2];
-  let best = { logRange: candidates[0], ...evaluate(candidates[0]) };
-  const refined = { logRange: candidates[1], ...evaluate(candidates[1]) };
-  if (refined.score <= best.score) best = refined;
-  return { model, nugget: best.nugget, sill: best.sill, range: Math.exp(best.logRange) };
+  const grid = evaluate(lo + bestI * step);
+  const refined = evaluate((a + b) / 2);
+  return refined.score <= grid.score ? refined : grid;
 }

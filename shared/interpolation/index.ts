@@ -2,9 +2,10 @@ export type { DataPoint, Target, Variogram, VariogramModel, VariogramLag } from 
 export { variogramValue, covariance, VARIOGRAM_MODELS } from './variogramModel';
 export { experimentalVariogram } from './experimentalVariogram';
 export type { ExperimentalVariogramOptions } from './experimentalVariogram';
-export { fitVariogram } from './fitVariogram';
-export type { FitVariogramOptions } from './fitVariogram';
-export { ordinaryKriging } from './ordinaryKriging';
+export { fitVariogram, fitVariogramDetailed, MIN_PAIRS_PER_BIN } from './fitVariogram';
+export type { FitVariogramOptions, VariogramFit } from './fitVariogram';
+export { ordinaryKriging, universalKriging } from './ordinaryKriging';
+export type { Drift } from './drift';
 export type { KrigingOptions, KrigingEstimate } from './ordinaryKriging';
 export { idw } from './idw';
 export type { IdwOptions } from './idw';

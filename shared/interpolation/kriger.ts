@@ -1,4 +1,5 @@
 import { luFactor, luSolve } from './denseSolve';
+import { driftBasis, type Drift, type DriftBasis } from './drift';
 import { createNeighbourIndex } from './neighbours';
 import type { Variogram } from './types';
 import { covarianceFunction } from './variogramModel';
@@ -7,6 +8,7 @@ import { covarianceFunction } from './variogramModel';
 export interface KrigerOutput {
   value: number;
   variance: number;
+  /** The multiplier of the constant drift term (the only one in ordinary kriging). */
   lagrangeMultiplier: number;
   /** Number of data used; their ids are ids[0..count) and, when asked for, weights weights[0..count). */
   count: number;
@@ -29,8 +31,8 @@ function distance(x1: number, y1: number, x2: number, y2: number): number {
 /** n² doubles: 2,048 points take 32 MB. */
 const PAIR_CACHE_MAX_POINTS = 2048;
 
-const SINGULAR =
-  'Kriging system is singular: check that the data points are distinct and the variogram is valid (a gaussian model usually needs a small nugget)';
+export const SINGULAR =
+  'Kriging system is singular: check that the data points are distinct and the variogram is valid (a gaussian model usually needs a small nugget; a planar drift needs wells that are not on one line)';
 
 /** Round-off leaves about −1e-15·C(0) at a datum; a clearly negative value is reported as is. */
 function clampVariance(variance: number, c00: number): number {
@@ -38,8 +40,10 @@ function clampVariance(variance: number, c00: number): number {
 }
 
 /**
- * Ordinary kriging in covariance form (Isaaks & Srivastava 1989, ch. 12): [C 1; 1ᵀ 0]·[w; μ] = [c0; 1],
- * estimate Σ wᵢzᵢ, variance C(0) − Σ wᵢc0ᵢ − μ. All points when `maxNeighbours` is absent or ≥ n.
+ * Kriging in covariance form (Isaaks & Srivastava 1989, ch. 12): [C F; Fᵀ 0]·[w; μ] = [c0; f0] with F the drift
+ * functions at the data (a column of ones for ordinary kriging; 1, x, y for a planar drift), estimate Σ wᵢzᵢ,
+ * variance C(0) − Σ wᵢc0ᵢ − Σ μₖf0ₖ — with a drift this is the universal-kriging variance, which includes the
+ * error of estimating the drift. All points when `maxNeighbours` is absent or ≥ n.
  * The returned output object is reused by the next call: copy what you keep.
  * @example
  * const k = createKriger(xs, ys, values, { model: 'exponential', nugget: 0, sill: 1, range: 30 }, 16, false);
@@ -52,21 +56,25 @@ export function createKriger(
   variogram: Variogram,
   maxNeighbours: number | undefined,
   wantWeights: boolean,
+  drift: Drift = 'constant',
 ): Kriger {
-  if (maxNeighbours === undefined || maxNeighbours >= xs.length) return createGlobalKriger(xs, ys, values, variogram, wantWeights);
-  return createNeighbourKriger(xs, ys, values, variogram, maxNeighbours);
+  const basis = driftBasis(xs, ys, drift);
+  if (maxNeighbours === undefined || maxNeighbours >= xs.length) return createGlobalKriger(xs, ys, values, variogram, wantWeights, basis);
+  return createNeighbourKriger(xs, ys, values, variogram, maxNeighbours, basis);
 }
 
 /**
- * All points: the (n+1)² system is inverted once; then the estimate is the dual form αᵀ[c0; 1] with α = K⁻¹[z; 0]
- * (O(n) per target) and the variance C(0) − rᵀK⁻¹r, a symmetric quadratic form (O(n²/2) per target).
+ * The full (n + p)² system for all data: covariances, then the p drift columns and rows, zero in the corner.
+ * Shared with the leave-one-out shortcut, which inverts the same matrix.
  */
-function createGlobalKriger(xs: Float64Array, ys: Float64Array, values: Float64Array, variogram: Variogram, wantWeights: boolean): Kriger {
+export function fillGlobalSystem(xs: Float64Array, ys: Float64Array, variogram: Variogram, basis: DriftBasis): Float64Array {
   const n = xs.length;
-  const s = n + 1;
+  const p = basis.terms;
+  const s = n + p;
   const cov = covarianceFunction(variogram);
   const c00 = variogram.nugget + variogram.sill;
   const lu = new Float64Array(s * s);
+  const f = new Float64Array(p);
   for (let i = 0; i < n; i++) {
     lu[i * s + i] = c00;
     for (let j = 0; j < i; j++) {
@@ -74,9 +82,33 @@ function createGlobalKriger(xs: Float64Array, ys: Float64Array, values: Float64A
       lu[i * s + j] = c;
       lu[j * s + i] = c;
     }
-    lu[i * s + n] = 1;
-    lu[n * s + i] = 1;
+    basis.write(xs[i], ys[i], f, 0);
+    for (let q = 0; q < p; q++) {
+      lu[i * s + n + q] = f[q];
+      lu[(n + q) * s + i] = f[q];
+    }
   }
+  return lu;
+}
+
+/**
+ * All points: the (n+1)² system is inverted once; then the estimate is the dual form αᵀ[c0; 1] with α = K⁻¹[z; 0]
+ * (O(n) per target) and the variance C(0) − rᵀK⁻¹r, a symmetric quadratic form (O(n²/2) per target).
+ */
+function createGlobalKriger(
+  xs: Float64Array,
+  ys: Float64Array,
+  values: Float64Array,
+  variogram: Variogram,
+  wantWeights: boolean,
+  basis: DriftBasis,
+): Kriger {
+  const n = xs.length;
+  const p = basis.terms;
+  const s = n + p;
+  const cov = covarianceFunction(variogram);
+  const c00 = variogram.nugget + variogram.sill;
+  const lu = fillGlobalSystem(xs, ys, variogram, basis);
   const pivots = new Int32Array(s);
   if (!luFactor(lu, s, pivots)) throw new Error(SINGULAR);
   const inverse = new Float64Array(s * s);
@@ -92,7 +124,6 @@ function createGlobalKriger(xs: Float64Array, ys: Float64Array, values: Float64A
   luSolve(lu, s, pivots, alpha);
 
   const r = new Float64Array(s);
-  r[n] = 1;
   const out: KrigerOutput = {
     value: 0,
     variance: 0,
@@ -106,11 +137,9 @@ function createGlobalKriger(xs: Float64Array, ys: Float64Array, values: Float64A
     estimate(x, y, exclude) {
       if (exclude >= 0) throw new Error('internal: leaving a point out needs neighbour mode');
       let value = 0;
-      for (let i = 0; i < n; i++) {
-        r[i] = cov(distance(x, y, xs[i], ys[i]));
-        value += alpha[i] * r[i];
-      }
-      value += alpha[n];
+      basis.write(x, y, r, n);
+      for (let i = 0; i < n; i++) r[i] = cov(distance(x, y, xs[i], ys[i]));
+      for (let i = 0; i < s; i++) value += alpha[i] * r[i];
       // rᵀK⁻¹r from the upper triangle: diagonal once, off-diagonal twice
       let quad = 0;
       for (let i = 0; i < s; i++) {
@@ -139,11 +168,20 @@ function createGlobalKriger(xs: Float64Array, ys: Float64Array, values: Float64A
  * Nearest `k` data per target. Buffers are allocated once; consecutive targets with the same neighbour set reuse
  * the factorisation (neighbouring grid cells often do), and data-to-data covariances are cached.
  */
-function createNeighbourKriger(xs: Float64Array, ys: Float64Array, values: Float64Array, variogram: Variogram, k: number): Kriger {
+function createNeighbourKriger(
+  xs: Float64Array,
+  ys: Float64Array,
+  values: Float64Array,
+  variogram: Variogram,
+  k: number,
+  basis: DriftBasis,
+): Kriger {
   const n = xs.length;
+  const p = basis.terms;
   const cov = covarianceFunction(variogram);
   const c00 = variogram.nugget + variogram.sill;
-  const size = k + 1;
+  const size = k + p;
+  const f = new Float64Array(p);
   const lu = new Float64Array(size * size);
   const pivots = new Int32Array(size);
   const rhs = new Float64Array(size);
@@ -172,7 +210,7 @@ function createNeighbourKriger(xs: Float64Array, ys: Float64Array, values: Float
   }
 
   function factor(m: number): void {
-    const s = m + 1;
+    const s = m + p;
     for (let i = 0; i < m; i++) {
       const a = ids[i];
       lu[i * s + i] = c00;
@@ -181,10 +219,13 @@ function createNeighbourKriger(xs: Float64Array, ys: Float64Array, values: Float
         lu[i * s + j] = c;
         lu[j * s + i] = c;
       }
-      lu[i * s + m] = 1;
-      lu[m * s + i] = 1;
+      basis.write(xs[a], ys[a], f, 0);
+      for (let q = 0; q < p; q++) {
+        lu[i * s + m + q] = f[q];
+        lu[(m + q) * s + i] = f[q];
+      }
     }
-    lu[m * s + m] = 0;
+    for (let q = 0; q < p; q++) for (let r = 0; r < p; r++) lu[(m + q) * s + m + r] = 0;
     if (!luFactor(lu, s, pivots)) throw new Error(SINGULAR);
   }
 
@@ -218,8 +259,9 @@ function createNeighbourKriger(xs: Float64Array, ys: Float64Array, values: Float
         c0[i] = cov(Math.sqrt(d2[i]));
         rhs[i] = c0[i];
       }
-      rhs[m] = 1;
-      luSolve(lu, m + 1, pivots, rhs);
+      basis.write(x, y, rhs, m);
+      basis.write(x, y, f, 0);
+      luSolve(lu, m + p, pivots, rhs);
       let value = 0;
       let wc = 0;
       for (let i = 0; i < m; i++) {
@@ -227,9 +269,10 @@ function createNeighbourKriger(xs: Float64Array, ys: Float64Array, values: Float
         value += rhs[i] * values[ids[i]];
         wc += rhs[i] * c0[i];
       }
+      for (let q = 0; q < p; q++) wc += rhs[m + q] * f[q];
       out.value = value;
       out.lagrangeMultiplier = rhs[m];
-      out.variance = clampVariance(c00 - wc - rhs[m], c00);
+      out.variance = clampVariance(c00 - wc, c00);
       out.count = m;
       return out;
     },

@@ -1,12 +1,20 @@
 import { luFactor, luSolve } from './denseSolve';
 import { createIdwEstimator, validatePower } from './idw';
-import { createKriger } from './kriger';
+import { driftBasis, type Drift } from './drift';
+import { createKriger, fillGlobalSystem, SINGULAR } from './kriger';
 import type { DataPoint, Variogram } from './types';
 import { validateMaxNeighbours, validatePoints } from './validate';
-import { covarianceFunction, validateVariogram } from './variogramModel';
+import { validateVariogram } from './variogramModel';
 
 export type LeaveOneOutMethod =
-  { kind: 'kriging'; variogram: Variogram; maxNeighbours?: number } | { kind: 'idw'; power: number; maxNeighbours?: number };
+  | {
+      kind: 'kriging';
+      variogram: Variogram;
+      maxNeighbours?: number;
+      /** 'linear': universal kriging with a planar drift, re-estimated without the left-out datum in every fold. */
+      drift?: Drift;
+    }
+  | { kind: 'idw'; power: number; maxNeighbours?: number };
 
 export interface LeaveOneOutResidual {
   index: number;
@@ -27,29 +35,23 @@ export interface LeaveOneOutResult {
 
 /**
  * All leave-one-out kriging errors from one inverse of the full system (Dubrule 1983, Mathematical Geology
- * 15(6), 687–699): with K the ordinary-kriging matrix and z̃ = [z; 0], observed − predicted = (K⁻¹z̃)ᵢ/(K⁻¹)ᵢᵢ and the
- * variance is 1/(K⁻¹)ᵢᵢ — O(n³) once instead of n separate solves.
+ * 15(6), 687–699): with K the kriging matrix and z̃ = [z; 0], observed − predicted = (K⁻¹z̃)ᵢ/(K⁻¹)ᵢᵢ and the
+ * variance is 1/(K⁻¹)ᵢᵢ — O(n³) once instead of n separate solves. It holds with drift terms in K too, and then each
+ * fold's drift is estimated without the datum it leaves out, as a separate solve per fold would.
  */
 function dubrule(
   xs: Float64Array,
   ys: Float64Array,
   values: Float64Array,
   variogram: Variogram,
+  drift: Drift,
 ): { predicted: Float64Array; variance: Float64Array } {
   const n = xs.length;
-  const s = n + 1;
-  const cov = covarianceFunction(variogram);
-  const lu = new Float64Array(s * s);
-  for (let i = 0; i < n; i++) {
-    for (let j = 0; j < n; j++) lu[i * s + j] = cov(Math.sqrt((xs[i] - xs[j]) ** 2 + (ys[i] - ys[j]) ** 2));
-    lu[i * s + n] = 1;
-    lu[n * s + i] = 1;
-  }
+  const basis = driftBasis(xs, ys, drift);
+  const s = n + basis.terms;
+  const lu = fillGlobalSystem(xs, ys, variogram, basis);
   const pivots = new Int32Array(s);
-  if (!luFactor(lu, s, pivots))
-    throw new Error(
-      'Kriging system is singular: check that the data points are distinct and the variogram is valid (a gaussian model usually needs a small nugget)',
-    );
+  if (!luFactor(lu, s, pivots)) throw new Error(SINGULAR);
   const alpha = new Float64Array(s);
   alpha.set(values);
   luSolve(lu, s, pivots, alpha);
@@ -83,12 +85,12 @@ export function leaveOneOut(points: readonly DataPoint[], method: LeaveOneOutMet
     validateVariogram(method.variogram);
     validateMaxNeighbours(method.maxNeighbours);
     if (method.maxNeighbours === undefined || method.maxNeighbours >= n - 1) {
-      const all = dubrule(xs, ys, values, method.variogram);
+      const all = dubrule(xs, ys, values, method.variogram, method.drift ?? 'constant');
       predicted.set(all.predicted);
       variance = all.variance;
     } else {
       variance = new Float64Array(n);
-      const kriger = createKriger(xs, ys, values, method.variogram, method.maxNeighbours, false);
+      const kriger = createKriger(xs, ys, values, method.variogram, method.maxNeighbours, false, method.drift ?? 'constant');
       for (let i = 0; i < n; i++) {
         const r = kriger.estimate(xs[i], ys[i], i);
         predicted[i] = r.value;

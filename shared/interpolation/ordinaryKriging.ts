@@ -52,3 +52,32 @@ export function ordinaryKriging(
   }
   return results;
 }
+
+/**
+ * Universal kriging with a planar drift a + b·x + c·y (Matheron 1969; Isaaks & Srivastava 1989, ch. 12 — chapter
+ * from memory): the weights filter the plane out, so a regional dip needs no separate fit, and the variance is the
+ * universal-kriging variance, which includes the error of estimating the plane from the same wells. The variogram is
+ * that of the residuals from the trend (fit it to the residuals of a least-squares plane).
+ *
+ * @example
+ * const points = [{ x: 0, y: 0, value: 0 }, { x: 10, y: 0, value: 10 }, { x: 0, y: 10, value: 20 }, { x: 10, y: 10, value: 30 }];
+ * universalKriging(points, { model: 'exponential', nugget: 0, sill: 1, range: 30 }, [{ x: 20, y: 0 }])[0].value; // 20: a plane is kept exactly
+ */
+export function universalKriging(
+  points: readonly DataPoint[],
+  variogram: Variogram,
+  targets: readonly Target[],
+  options: Pick<KrigingOptions, 'maxNeighbours'> = {},
+): KrigingEstimate[] {
+  const { xs, ys, values } = validatePoints(points, 4, 'Universal kriging with a planar drift');
+  validateVariogram(variogram);
+  validateTargets(targets);
+  validateMaxNeighbours(options.maxNeighbours);
+  if (options.maxNeighbours !== undefined && options.maxNeighbours < 4)
+    throw new Error(`maxNeighbours must be at least 4 with a planar drift, got ${options.maxNeighbours}`);
+  const kriger = createKriger(xs, ys, values, variogram, options.maxNeighbours, false, 'linear');
+  return targets.map((t) => {
+    const r = kriger.estimate(t.x, t.y, -1);
+    return { value: r.value, variance: r.variance };
+  });
+}
