@@ -109,6 +109,8 @@ export interface Profile {
   trendFit: { r2: number; n: number } | null;
   /** Log-derived pore pressure, NaN where the method had no (shale) sample; null without a method. */
   porePa: Float64Array | null;
+  /** The log as the pore-pressure method read it (shale samples, smoothed), in its unit; null without a method. */
+  poreLog: Float64Array | null;
   /** Pore pressure used for fracture and calibration: gaps bridged, normal above the first log value. */
   poreFilledPa: Float64Array | null;
   fracturePa: Float64Array | null;
@@ -259,6 +261,7 @@ export function buildProfile(input: BuildProfileInput): Profile {
 
   // Pore pressure from logs, on shale samples when the trend carries a gamma-ray cut-off.
   let porePa: Float64Array | null = null;
+  let poreLog: Float64Array | null = null;
   const pore = interpretation.pore;
   if (pore) {
     const needs = pore.method === 'eaton-resistivity' ? 'resistivity' : 'sonic';
@@ -275,6 +278,7 @@ export function buildProfile(input: BuildProfileInput): Profile {
         return v;
       });
       const smoothed = pore.smoothingM ? runningMedian(tvdM, used, pore.smoothingM) : used;
+      poreLog = smoothed;
       porePa = porePressure(pore, { overburdenPa, normalPa: hydrostaticPa, log: smoothed, trend: isEaton ? normalTrend : null });
     }
   }
@@ -351,6 +355,7 @@ export function buildProfile(input: BuildProfileInput): Profile {
     normalTrendCurve: normalTrend && trend ? trend.curve : null,
     trendFit,
     porePa,
+    poreLog,
     poreFilledPa,
     fracturePa,
     suggestedTop,

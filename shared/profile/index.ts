@@ -9,6 +9,7 @@ export * from './logGrid';
 export * from './trend';
 export * from './methods';
 export * from './calibration';
+export * from './calibrate';
 export * from './window';
 export * from './buildProfile';
 export * from './csv';
