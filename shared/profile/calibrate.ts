@@ -1,7 +1,7 @@
 import { G } from '../units/constants';
 import type { Profile } from './buildProfile';
 import { isGoodPoreMeasurement, type ProfileObservation } from './calibration';
-import { interpolateAt } from './interpolate';
+import { bridgeGaps, interpolateAt } from './interpolate';
 import type { FractureSettings } from './methods';
 
 /** What of a built profile the calibrations read. */
@@ -75,7 +75,8 @@ function minimise(f: (x: number) => number, a: number, b: number): number {
 /**
  * Eaton's exponent fitted to the well's good formation tests and DSTs: the n minimising Σ (P(n) − Pᵢ)² with
  * P = S − (S − Pₙ)·rⁿ, r = Δtₙ/Δt (sonic) or R/Rₙ (resistivity) read from the log as the method reads it (Eaton 1975,
- * SPE 5544). The normal trend must be set first: the fit is of the exponent alone.
+ * SPE 5544). Tests are taken in sands, where a shale filter leaves the log empty: the shale log is bridged across such
+ * gaps, so each test meets the shale beside it. The normal trend must be set first: the fit is of the exponent alone.
  * @example calibrateEatonExponent(profile, observations, 'eaton-sonic').params; // { exponent: 2.7 }
  */
 export function calibrateEatonExponent(
@@ -96,8 +97,9 @@ export function calibrateEatonExponent(
     return empty('Set a normal trend and an Eaton method first: the exponent is fitted with them.');
   if (tests.length === 0) return empty('No good formation tests or DSTs on this well to calibrate against.', 0);
   const points: { tvdM: number; s: number; pn: number; ratio: number; measured: number }[] = [];
+  const shaleLog = bridgeGaps(profile.tvdM, profile.poreLog);
   for (const t of tests) {
-    const log = interpolateAt(profile.tvdM, profile.poreLog, t.tvdM);
+    const log = interpolateAt(profile.tvdM, shaleLog, t.tvdM);
     const trend = interpolateAt(profile.tvdM, profile.normalTrend, t.tvdM);
     const s = interpolateAt(profile.tvdM, profile.overburdenPa, t.tvdM);
     const pn = interpolateAt(profile.tvdM, profile.hydrostaticPa, t.tvdM);
