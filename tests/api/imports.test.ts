@@ -360,7 +360,7 @@ describe('surveys and pressures', () => {
     expect(start.status).toBe(202);
     let job;
     for (let i = 0; i < 100; i++) {
-      job = (await team.agent.get(`/api/teams/${team.teamId}/imports/jobs/${start.body.jobId}`)).body;
+      job = (await team.agent.get(`/api/teams/${team.teamId}/jobs/${start.body.jobId}`)).body;
       if (job.state !== 'running') break;
       await new Promise((r) => setTimeout(r, 100));
     }

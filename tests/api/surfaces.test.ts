@@ -74,7 +74,7 @@ describe('TOP surfaces over a demo prospect', () => {
     for (const start of [a, b]) {
       let job;
       for (let i = 0; i < 200; i++) {
-        job = (await geo.get(`${base}/surface-jobs/${start.body.jobId}`)).body;
+        job = (await geo.get(`${base}/jobs/${start.body.jobId}`)).body;
         if (job.state !== 'running') break;
         await new Promise((r) => setTimeout(r, 100));
       }
