@@ -80,8 +80,15 @@ describe('TOP surfaces over a demo prospect', () => {
       }
       expect(job.error).toBeUndefined();
       expect(job.state).toBe('done');
+      expect(job.kind).toBe('surface');
       expect(job.result.grid.nx).toBeGreaterThan(10);
     }
+    // Anyone who may read the team may follow its surface runs (a planner cannot run one); the old URL is gone.
+    const planner = await signedInAgent(ctx, 'planner@porelith.example');
+    const seen = await planner.get(`${base}/jobs/${a.body.jobId}`);
+    expect(seen.status).toBe(200);
+    expect(seen.body.result.id).toBeDefined();
+    expect((await geo.get(`${base}/surface-jobs/${a.body.jobId}`)).status).toBe(404);
   });
 
   it('refuses too few wells, too many cells and a lone prospect clearly, storing nothing', async () => {
