@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { leaveOneOut } from '../../../shared/interpolation';
 import { hiddenTopTvdssM } from '../../../server/db/seed/demoBasin/surfaces';
 import { demoTopPick } from '../../../server/db/seed/demoBasin/writeInterpretations';
-import { computeSurface, SurfaceInputError, type SurfaceInputPoint } from '../../../shared/interpolation/surface';
+import { computeSurface, type SurfaceInputPoint } from '../../../shared/interpolation/surface';
 import { surfaceRequestBody } from '../../../shared/schemas/surfaces';
 import { demo } from '../demoBasin/demoData';
 
