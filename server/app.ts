@@ -13,9 +13,11 @@ import type { Mailer } from './features/mail/mailer';
 import { teamsRouter } from './features/teams/teams.router';
 import { wellsRouter } from './features/wells/wells.router';
 import { importsRouter } from './features/imports/imports.router';
+import { jobsRouter } from './features/jobs/jobs.router';
 import { basemapRouter } from './features/tiles/basemap.router';
 import { teamTilesRouter } from './features/tiles/teamTiles.router';
 import { planningRouter } from './features/planning/planning.router';
+import { JobRegistry } from './lib/jobs';
 import { TeamChanges } from './lib/teamChanges';
 import { layersRouter } from './features/layers/layers.router';
 import { interpretationsRouter } from './features/interpretations/interpretations.router';
@@ -80,16 +82,18 @@ export function createApp({ db, env, mailer, logger, serveClient = true, tileCac
   app.use('/api/health', healthRouter(db));
   app.use('/api/auth', authRouter(db, env, mailer));
   const changes = new TeamChanges();
+  const jobs = new JobRegistry();
   app.use(
     '/api/teams',
     requireSession,
     teamsRouter(db, env, mailer),
     wellsRouter(db, changes),
-    importsRouter(db, changes),
+    importsRouter(db, changes, jobs),
     planningRouter(db, changes),
     layersRouter(db, changes),
     interpretationsRouter(db, changes),
-    surfacesRouter(db),
+    surfacesRouter(db, jobs),
+    jobsRouter(jobs),
     teamTilesRouter(db, changes, { cache: tileCache }),
   );
   app.use('/api', notFoundApi);

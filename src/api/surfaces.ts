@@ -1,22 +1,11 @@
 import { z } from 'zod';
 import { prospectSchema, type Prospect } from '@shared/schemas/planning';
+import { jobStartedSchema, type JobStarted } from '@shared/schemas/jobs';
 import { surfaceSchema, surfaceSummarySchema, type Surface, type SurfaceRequest, type SurfaceSummary } from '@shared/schemas/surfaces';
 import { api, type ApiClient } from './client';
 
 const teamPath = (teamId: string) => `/api/teams/${encodeURIComponent(teamId)}`;
 const surfacePath = (teamId: string, surfaceId: string) => `${teamPath(teamId)}/surfaces/${encodeURIComponent(surfaceId)}`;
-
-/** A surface run in progress as `GET /surface-jobs/:jobId` reports it (server/lib/jobs.ts). */
-export const surfaceJobSchema = z.object({
-  id: z.string(),
-  state: z.enum(['running', 'done', 'error']),
-  phase: z.string(),
-  done: z.number(),
-  total: z.number(),
-  result: surfaceSchema.optional(),
-  error: z.object({ status: z.number(), code: z.string(), message: z.string(), details: z.unknown().optional() }).optional(),
-});
-export type SurfaceJob = z.infer<typeof surfaceJobSchema>;
 
 /** The value of a surface at a point; null outside the grid. */
 export const surfacePointValueSchema = z.object({ value: z.number().nullable(), stdDev: z.number().nullable(), unit: z.string() }).loose();
@@ -47,29 +36,12 @@ export function getSurface(teamId: string, surfaceId: string, client: ApiClient 
 }
 
 /**
- * Starts a surface run in the background; poll it with `getSurfaceJob`. A body the server cannot accept
+ * Starts a surface run in the background; poll it with `getJob(teamId, jobId, 'surface')` (./jobs). A body the server cannot accept
  * rejects at once with status 400; problems with the wells (fewer than 3 picks…) come back as the job's error.
  * @example const { jobId } = await startSurfaceJob(teamId, prospectId, { wells: { from: 'prospect', bufferKm: 30 } });
  */
-export function startSurfaceJob(
-  teamId: string,
-  prospectId: string,
-  body: SurfaceRequest,
-  client: ApiClient = api,
-): Promise<{ jobId: string }> {
-  return client.post(
-    `${teamPath(teamId)}/prospects/${encodeURIComponent(prospectId)}/surfaces?async=true`,
-    body,
-    z.object({ jobId: z.string() }),
-  );
-}
-
-/**
- * Where a background surface run stands; `result` is the stored surface once `state` is `done`.
- * @example const job = await getSurfaceJob(teamId, jobId); job.done / job.total
- */
-export function getSurfaceJob(teamId: string, jobId: string, client: ApiClient = api): Promise<SurfaceJob> {
-  return client.get(`${teamPath(teamId)}/surface-jobs/${encodeURIComponent(jobId)}`, surfaceJobSchema);
+export function startSurfaceJob(teamId: string, prospectId: string, body: SurfaceRequest, client: ApiClient = api): Promise<JobStarted> {
+  return client.post(`${teamPath(teamId)}/prospects/${encodeURIComponent(prospectId)}/surfaces?async=true`, body, jobStartedSchema);
 }
 
 /**

@@ -59,16 +59,16 @@ function fakeImportServer(options: { delayFor?: (fileName: string) => number } =
       const mapping = fields.mapping ? (JSON.parse(fields.mapping) as Record<string, string | null>) : undefined;
       return Response.json(previewOf(await file.text(), file.name, mapping));
     }
-    if (url === `/api/teams/${TEAM}/imports/jobs/job-1`) {
+    if (url === `/api/teams/${TEAM}/jobs/job-1`) {
       polls += 1;
-      if (polls < 2) return Response.json({ id: 'job-1', state: 'running', phase: 'writing new wells', done: 1, total: 2 });
+      if (polls < 2) return Response.json({ id: 'job-1', kind: 'import', state: 'running', phase: 'writing new wells', done: 1, total: 2 });
       const result = {
         ...previewOf('name,lon,lat\nA-1,1,2\n', 'w.csv'),
         dryRun: false,
         skipped: false,
         outcome: { uploadId: 'u1', created: 1, updated: 0, skippedLines: [] },
       };
-      return Response.json({ id: 'job-1', state: 'done', phase: 'finished', done: 2, total: 2, result });
+      return Response.json({ id: 'job-1', kind: 'import', state: 'done', phase: 'finished', done: 2, total: 2, result });
     }
     return Response.json({ error: { code: 'not_found', message: `no route ${url}` } }, { status: 404 });
   });

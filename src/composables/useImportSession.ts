@@ -1,15 +1,9 @@
 import { computed, onScopeDispose, ref, shallowRef, type Ref } from 'vue';
-import type { ImportKind } from '@shared/schemas/imports';
 import { ApiClientError } from '@/api/client';
-import {
-  getImportJob,
-  importCommitSchema,
-  importError,
-  previewImport,
-  startImportJob,
-  type ImportCommit,
-  type ImportPreview,
-} from '@/api/imports';
+import type { ImportCommit, ImportKind, ImportPreview } from '@shared/schemas/imports';
+import type { JobPhase } from '@shared/schemas/jobs';
+import { importError, previewImport, startImportJob } from '@/api/imports';
+import { getJob } from '@/api/jobs';
 import {
   assignField,
   commitBlocker,
@@ -29,14 +23,15 @@ export const POLL_INTERVAL_MS = 400;
 
 export interface CommitProgress {
   state: LoadState;
-  phase: string;
+  /** The server job's phase; null while the file is still being sent. */
+  phase: JobPhase | null;
   done: number;
   total: number;
   result: ImportCommit | null;
   error: ApiClientError | null;
 }
 
-const idleCommit = (): CommitProgress => ({ state: 'idle', phase: '', done: 0, total: 0, result: null, error: null });
+const idleCommit = (): CommitProgress => ({ state: 'idle', phase: null, done: 0, total: 0, result: null, error: null });
 
 const freshChoices = (kind: ImportKind): ImportChoices => ({ kind, mapping: null, units: {}, epsg: 4326, wellId: null, curveRoles: {} });
 
@@ -143,7 +138,7 @@ export function useImportSession(teamId: Ref<string | null>, options: { onCommit
   async function commit(): Promise<void> {
     if (!teamId.value || !file.value || blocker.value) return;
     const team = teamId.value;
-    progress.value = { ...idleCommit(), state: 'loading', phase: 'uploading the file' };
+    progress.value = { ...idleCommit(), state: 'loading' };
     try {
       const request = {
         ...importRequest(choices.value),
@@ -153,15 +148,15 @@ export function useImportSession(teamId: Ref<string | null>, options: { onCommit
       const { jobId } = await startImportJob(team, request, file.value);
       for (;;) {
         if (disposed) return;
-        const job = await getImportJob(team, jobId);
+        const job = await getJob(team, jobId, 'import');
         progress.value = { ...progress.value, phase: job.phase, done: job.done, total: job.total };
         if (job.state === 'error' && job.error) {
           throw importError(job.error.status, job.error.code, job.error.message, job.error.details);
         }
         if (job.state === 'done') {
-          const parsed = importCommitSchema.safeParse(job.result);
-          if (!parsed.success) throw new ApiClientError(200, 'unexpected_reply', 'The import finished, but its outcome could not be read.');
-          progress.value = { ...progress.value, state: 'done', result: parsed.data };
+          if (!job.result || job.result.dryRun)
+            throw new ApiClientError(200, 'unexpected_reply', 'The import finished, but its outcome could not be read.');
+          progress.value = { ...progress.value, state: 'done', result: job.result };
           break;
         }
         await sleep(POLL_INTERVAL_MS);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runProgress } from './useSurfaceJob';
 
-// The phases and their order are the server's (server/features/surfaces: surfaces.service.ts, computeSurface.ts).
+// The phases and their order are the server's (shared/schemas/jobs.ts SURFACE_JOB_PHASES).
 describe('runProgress', () => {
   it('maps each phase into its share of the whole run', () => {
     expect(runProgress({ phase: 'interpolating', done: 500, total: 1000 })).toEqual({ label: 'Interpolating the grid', percent: 44 });
@@ -15,7 +15,14 @@ describe('runProgress', () => {
     expect(next).toBeGreaterThanOrEqual(end);
   });
 
-  it('shows an unknown phase by name', () => {
-    expect(runProgress({ phase: 'warming up', done: 1, total: 2 })).toEqual({ label: 'warming up', percent: 0 });
+  it('places the at-depth runs’ profile building between gathering the wells and interpolating', () => {
+    expect(runProgress({ phase: 'building well profiles', done: 5, total: 10 })).toEqual({ label: 'Building well profiles', percent: 6 });
+    expect(runProgress({ phase: 'gathering wells', done: 1, total: 1 }).percent).toBe(
+      runProgress({ phase: 'building well profiles', done: 0, total: 1 }).percent,
+    );
+  });
+
+  it('labels a phase outside a surface run but gives it no share', () => {
+    expect(runProgress({ phase: 'failed', done: 0, total: 0 })).toEqual({ label: 'Failed', percent: 0 });
   });
 });

@@ -1,32 +1,41 @@
 import { onBeforeUnmount, ref, shallowRef } from 'vue';
+import type { JobPhase, SurfaceJobPhase } from '@shared/schemas/jobs';
 import type { Surface, SurfaceRequest } from '@shared/schemas/surfaces';
-import { getSurfaceJob, startSurfaceJob } from '@/api/surfaces';
+import { getJob } from '@/api/jobs';
+import { startSurfaceJob } from '@/api/surfaces';
 import type { LoadState } from '@/stores/session';
+import { JOB_PHASE_LABELS } from '@/utils/jobPhases';
 
 /** How often the run's progress is asked for: quick enough for a moving bar, light on the server. */
 const POLL_MS = 400;
 
-/** The server's phases in order, with a label and the share of the whole run each takes (rough timings of demo runs). */
-const PHASES: { key: string; label: string; from: number; to: number }[] = [
-  { key: 'starting', label: 'Starting', from: 0, to: 2 },
-  { key: 'gathering wells', label: 'Gathering wells', from: 2, to: 8 },
-  { key: 'interpolating', label: 'Interpolating the grid', from: 8, to: 80 },
-  { key: 'cross-validating', label: 'Cross-validating', from: 80, to: 90 },
-  { key: 'contouring', label: 'Drawing contours', from: 90, to: 95 },
-  { key: 'saving', label: 'Saving', from: 95, to: 99 },
-  { key: 'finished', label: 'Finished', from: 100, to: 100 },
-];
+/**
+ * The share of the whole run (percent, from → to) each phase of a surface job takes, in the server's order
+ * (rough timings of demo runs); labels come from the one phase table.
+ */
+const SHARES: Partial<Record<JobPhase, [number, number]>> = {
+  starting: [0, 2],
+  'gathering wells': [2, 4],
+  'building well profiles': [4, 8],
+  interpolating: [8, 80],
+  'cross-validating': [80, 90],
+  contouring: [90, 95],
+  saving: [95, 99],
+  finished: [100, 100],
+} satisfies Record<'starting' | SurfaceJobPhase | 'finished', [number, number]>;
 
 /**
  * Overall progress of a run, 0…100, from the server's phase and its done/total; each phase restarts
  * its own count, so the bar would jump back without this.
  * @example runProgress({ phase: 'interpolating', done: 500, total: 1000 }) // { label: 'Interpolating the grid', percent: 44 }
  */
-export function runProgress(job: { phase: string; done: number; total: number }): { label: string; percent: number } {
-  const p = PHASES.find((x) => x.key === job.phase);
-  if (!p) return { label: job.phase, percent: 0 };
-  const share = job.total > 0 ? Math.min(1, Math.max(0, job.done / job.total)) : 0;
-  return { label: p.label, percent: Math.round(p.from + share * (p.to - p.from)) };
+export function runProgress(job: { phase: JobPhase; done: number; total: number }): { label: string; percent: number } {
+  const label = JOB_PHASE_LABELS[job.phase];
+  const share = SHARES[job.phase];
+  if (!share) return { label, percent: 0 };
+  const [from, to] = share;
+  const part = job.total > 0 ? Math.min(1, Math.max(0, job.done / job.total)) : 0;
+  return { label, percent: Math.round(from + part * (to - from)) };
 }
 
 /**
@@ -58,7 +67,7 @@ export function useSurfaceJob() {
       const { jobId } = await startSurfaceJob(teamId, prospectId, body);
       for (;;) {
         if (stopped) return null;
-        const job = await getSurfaceJob(teamId, jobId);
+        const job = await getJob(teamId, jobId, 'surface');
         const progress = runProgress(job);
         phase.value = progress.label;
         if (job.state === 'error') throw new Error(job.error?.message ?? 'The surface run failed.');

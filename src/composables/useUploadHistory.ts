@@ -1,5 +1,6 @@
 import { computed, watch, type Ref } from 'vue';
-import { listUploads, type UploadRecord } from '@/api/imports';
+import type { UploadRecord } from '@shared/schemas/imports';
+import { listUploads } from '@/api/imports';
 import { useRequest } from './useRequest';
 
 /**

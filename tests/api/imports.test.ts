@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formationTops, pressureObservations, surveyStations, uploads, wells } from '../../server/db/schema';
-import { freshTeamAgent, startTestApp, type TestContext } from './support/testApp';
+import { freshTeamAgent, memberAgent, startTestApp, type TestContext } from './support/testApp';
 
 const fixture = (name: string) => readFileSync(`tests/fixtures/imports/${name}`);
 
@@ -360,7 +360,7 @@ describe('surveys and pressures', () => {
     expect(start.status).toBe(202);
     let job;
     for (let i = 0; i < 100; i++) {
-      job = (await team.agent.get(`/api/teams/${team.teamId}/imports/jobs/${start.body.jobId}`)).body;
+      job = (await team.agent.get(`/api/teams/${team.teamId}/jobs/${start.body.jobId}`)).body;
       if (job.state !== 'running') break;
       await new Promise((r) => setTimeout(r, 100));
     }
@@ -369,6 +369,13 @@ describe('surveys and pressures', () => {
     expect(job.phase).toBe('finished');
     expect(job.total).toBe(3001);
     expect(job.result.outcome.created).toBe(3001);
+    expect(job.kind).toBe('import');
+    // The one job route asks for the right to import before it shows an import job; another team never finds it.
+    const viewer = await memberAgent(ctx, team.teamId, 'viewer');
+    expect((await viewer.agent.get(`/api/teams/${team.teamId}/jobs/${start.body.jobId}`)).status).toBe(403);
+    const other = await freshTeamAgent(ctx, 'Other import team', 'geoscientist');
+    expect((await other.agent.get(`/api/teams/${other.teamId}/jobs/${start.body.jobId}`)).status).toBe(404);
+    expect((await team.agent.get(`/api/teams/${team.teamId}/imports/jobs/${start.body.jobId}`)).status).toBe(404);
   });
 });
 

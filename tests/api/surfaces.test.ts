@@ -2,6 +2,8 @@ import { sql } from 'drizzle-orm';
 import proj4 from 'proj4';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { hiddenTopTvdssM } from '../../server/db/seed/demoBasin/surfaces';
+import type { Variogram } from '../../shared/interpolation';
+import { predictAll, shiftedCovarianceParameters, trainWithParameters } from '../bench/reference/sakitamKriging';
 import { signedInAgent, startTestApp, type TestContext } from './support/testApp';
 
 let ctx: TestContext;
@@ -19,6 +21,21 @@ beforeAll(async () => {
 });
 afterAll(() => ctx.close());
 
+/**
+ * Ordinary kriging by an outside library: @sakitam-gis/kriging fed C(h) + L is simple kriging that tends to ordinary
+ * kriging as L grows; one Richardson step on L and 2L removes the O(1/L) term (the method and its check against the
+ * library: tests/bench/reference/sakitamKriging.ts, tests/unit/interpolation/krigingReference.test.ts).
+ */
+function referenceKriging(data: { x: number; y: number; value: number }[], v: Variogram, targets: { x: number; y: number }[]) {
+  const t = data.map((d) => d.value);
+  const x = data.map((d) => d.x);
+  const y = data.map((d) => d.y);
+  const shift = 1e4 * (v.nugget + v.sill);
+  const p1 = predictAll(trainWithParameters(t, x, y, shiftedCovarianceParameters(v, shift)), targets);
+  const p2 = predictAll(trainWithParameters(t, x, y, shiftedCovarianceParameters(v, 2 * shift)), targets);
+  return targets.map((_, i) => 2 * p2[i] - p1[i]);
+}
+
 describe('TOP surfaces over a demo prospect', () => {
   let surfaceId: string;
 
@@ -32,7 +49,53 @@ describe('TOP surfaces over a demo prospect', () => {
     expect(res.body.grid.values.length).toBe(res.body.grid.nx * res.body.grid.ny);
     expect(res.body.contours.features.length).toBeGreaterThan(0);
     expect(res.body.variogram.fitted).toBe(true);
-    expect(res.body.crossValidation.rmse).toBeGreaterThan(0);
+
+    // The same wells and fitted variogram through an outside kriging library give the grid and the cross-validation.
+    const { grid, variogram, wells } = res.body as {
+      grid: {
+        nx: number;
+        ny: number;
+        cellSizeM: number;
+        x0: number;
+        y0: number;
+        projection: string;
+        values: (number | null)[];
+        min: number;
+        max: number;
+      };
+      variogram: { model: Variogram };
+      wells: { lon: number; lat: number; value: number; predicted: number }[];
+    };
+    const frame = proj4('EPSG:4326', grid.projection);
+    const data = wells.map((w) => {
+      const [x, y] = frame.forward([w.lon, w.lat]);
+      return { x, y, value: w.value };
+    });
+    const cells = grid.values.flatMap((value, k) =>
+      value === null || k % 5 !== 0
+        ? []
+        : [{ value, x: grid.x0 + (k % grid.nx) * grid.cellSizeM, y: grid.y0 + Math.floor(k / grid.nx) * grid.cellSizeM }],
+    );
+    expect(cells.length).toBeGreaterThan(10);
+    const expected = referenceKriging(data, variogram.model, cells);
+    cells.forEach((c, i) => expect(c.value).toBeCloseTo(expected[i], 2));
+    // Leave-one-out: each well estimated from all the others (Isaaks & Srivastava 1989, ch. 15).
+    const looPredicted = data.map(
+      (d, i) =>
+        referenceKriging(
+          data.filter((_, j) => j !== i),
+          variogram.model,
+          [d],
+        )[0],
+    );
+    wells.forEach((w, i) => expect(w.predicted).toBeCloseTo(looPredicted[i], 2));
+    const rmse = Math.sqrt(looPredicted.reduce((sum, p, i) => sum + (p - data[i].value) ** 2, 0) / data.length);
+    expect(res.body.crossValidation.rmse).toBeCloseTo(rmse, 2);
+    // d3-contour bands: one per multiple of the 50 m interval within the grid's range, each at least one cell.
+    const levels: number[] = [];
+    for (let level = Math.ceil(grid.min / 50) * 50; level <= grid.max; level += 50) levels.push(level);
+    expect(levels.length).toBeGreaterThan(3);
+    expect(res.body.contours.features.map((f: { properties: { value: number } }) => f.properties.value)).toEqual(levels);
     // Every well's interpretation version is recorded with its value.
     expect(res.body.wells.every((w: { interpretationVersion: number }) => w.interpretationVersion === 1)).toBe(true);
   });
@@ -74,14 +137,21 @@ describe('TOP surfaces over a demo prospect', () => {
     for (const start of [a, b]) {
       let job;
       for (let i = 0; i < 200; i++) {
-        job = (await geo.get(`${base}/surface-jobs/${start.body.jobId}`)).body;
+        job = (await geo.get(`${base}/jobs/${start.body.jobId}`)).body;
         if (job.state !== 'running') break;
         await new Promise((r) => setTimeout(r, 100));
       }
       expect(job.error).toBeUndefined();
       expect(job.state).toBe('done');
+      expect(job.kind).toBe('surface');
       expect(job.result.grid.nx).toBeGreaterThan(10);
     }
+    // Anyone who may read the team may follow its surface runs (a planner cannot run one); the old URL is gone.
+    const planner = await signedInAgent(ctx, 'planner@porelith.example');
+    const seen = await planner.get(`${base}/jobs/${a.body.jobId}`);
+    expect(seen.status).toBe(200);
+    expect(seen.body.result.id).toBeDefined();
+    expect((await geo.get(`${base}/surface-jobs/${a.body.jobId}`)).status).toBe(404);
   });
 
   it('refuses too few wells, too many cells and a lone prospect clearly, storing nothing', async () => {

@@ -3,11 +3,11 @@ import multer from 'multer';
 import { z } from 'zod';
 import { IMPORT_KINDS } from '../../../shared/schemas/imports';
 import type { Db } from '../../db/client';
-import { HttpError, badRequest, notFound } from '../../lib/httpError';
+import { HttpError, badRequest } from '../../lib/httpError';
 import { parse } from '../../lib/parse';
 import type { TeamChanges } from '../../lib/teamChanges';
 import { requireTeam, teamIdOf } from '../../middleware/guards';
-import { JobRegistry } from '../../lib/jobs';
+import type { JobRegistry } from '../../lib/jobs';
 import { MAX_FILE_BYTES, getUploadFile, listUploads, runImport } from './imports.service';
 
 const jsonField = (what: string) =>
@@ -61,9 +61,8 @@ const receiveFile: RequestHandler = (req, res, next) => {
   });
 };
 
-export function importsRouter(db: Db, changes: TeamChanges): Router {
+export function importsRouter(db: Db, changes: TeamChanges, jobs: JobRegistry): Router {
   const r = Router({ mergeParams: true });
-  const jobs = new JobRegistry();
 
   r.post('/:teamId/imports', requireTeam('wells.import'), receiveFile, async (req, res) => {
     const form = parse(importForm, req.body ?? {});
@@ -84,7 +83,7 @@ export function importsRouter(db: Db, changes: TeamChanges): Router {
       onDuplicate: form.onDuplicate,
     };
     if (form.async) {
-      const job = jobs.start(request.teamId, async (progress) => {
+      const job = jobs.start(request.teamId, 'import', async (progress) => {
         const result = await runImport(db, request, progress);
         if (!form.dryRun) changes.bump(request.teamId);
         return result;
@@ -95,13 +94,6 @@ export function importsRouter(db: Db, changes: TeamChanges): Router {
     const result = await runImport(db, request);
     if (!form.dryRun) changes.bump(request.teamId);
     res.status(form.dryRun ? 200 : 201).json(result);
-  });
-
-  r.get('/:teamId/imports/jobs/:jobId', requireTeam('wells.import'), (req, res) => {
-    const job = jobs.get(teamIdOf(req), String(req.params.jobId));
-    if (!job) throw notFound('That import job');
-    const { teamId: _t, ...rest } = job;
-    res.json(rest);
   });
 
   r.get('/:teamId/imports', requireTeam('team.read'), async (req, res) => {

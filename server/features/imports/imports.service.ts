@@ -6,7 +6,16 @@ import { parseLas, type LasFile } from '../../../shared/formats/las';
 import type { Problem } from '../../../shared/formats/problem';
 import { IMPORT_FIELDS, UNITS_FOR_QUANTITY, type CsvImportKind } from '../../../shared/imports/fields';
 import { mapCsvRows, type ColumnMapping, type FieldUnits } from '../../../shared/imports/mapRows';
-import type { ImportKind } from '../../../shared/schemas/imports';
+import type {
+  CsvFacts,
+  ImportCommit,
+  ImportKind,
+  ImportOutcome,
+  ImportPreview,
+  ImportSummary,
+  PreviewRow,
+  UploadRecord,
+} from '../../../shared/schemas/imports';
 import type { Db } from '../../db/client';
 import { uploads, wells } from '../../db/schema';
 import { HttpError, badRequest, conflict, notFound } from '../../lib/httpError';
@@ -42,17 +51,16 @@ interface Planned {
   notes: Problem[];
   totalRecords: number;
   invalidLines: number[];
-  preview: Record<string, unknown>[];
-  counts: Record<string, number>;
-  csv?: {
-    delimiter: string;
-    decimalComma: boolean;
-    encoding: string;
-    columns: { name: string; field: string | null; unit?: string }[];
-    units: FieldUnits;
-  };
+  preview: PreviewRow[];
+  /** The kind's own counts beside `valid` (create/update, wells, curves…); records and invalid are added last. */
+  counts: { valid: number } & Record<string, number>;
+  csv?: CsvFacts & { units: FieldUnits };
   las?: { plan: LasPlan; version: number | null; wrap: string };
-  write: (tx: Parameters<Parameters<Db['transaction']>[0]>[0], uploadId: string, progress: Progress) => Promise<Record<string, unknown>>;
+  write: (
+    tx: Parameters<Parameters<Db['transaction']>[0]>[0],
+    uploadId: string,
+    progress: Progress,
+  ) => Promise<{ created: number } & Record<string, unknown>>;
 }
 
 function sha256(bytes: Buffer) {
@@ -247,7 +255,7 @@ async function findDuplicate(db: Db, teamId: string, hash: string) {
  * Preview (dryRun) or commit one file. A commit runs in one transaction: with any problem nothing is
  * written, unless `skipInvalid` was chosen, in which case the skipped lines are kept in the upload record.
  */
-export async function runImport(db: Db, req: ImportRequest, progress: Progress = () => {}) {
+export async function runImport(db: Db, req: ImportRequest, progress: Progress = () => {}): Promise<ImportPreview | ImportCommit> {
   const hash = sha256(req.bytes);
   const planned = await plan(db, req, progress);
   const duplicate = await findDuplicate(db, req.teamId, hash);
@@ -258,7 +266,7 @@ export async function runImport(db: Db, req: ImportRequest, progress: Progress =
     .map((p, i) => ({ p, i }))
     .sort((a, b) => a.p.line - b.p.line || a.i - b.i)
     .map(({ p }) => p);
-  const summary = {
+  const summary: ImportSummary = {
     kind: req.kind,
     fileName: req.fileName,
     sizeBytes: req.bytes.length,
@@ -272,10 +280,10 @@ export async function runImport(db: Db, req: ImportRequest, progress: Progress =
     csv: planned.csv,
     las: planned.las && { ...planned.las, plan: { ...planned.las.plan } },
   };
-  if (req.dryRun) return { dryRun: true, ...summary, preview: planned.preview };
+  if (req.dryRun) return { dryRun: true, ...summary, preview: planned.preview } satisfies ImportPreview;
 
   // Skipping bad rows is no help when nothing valid remains, and a LAS file is one record.
-  const fatal = req.kind === 'las' || (planned.counts.valid ?? 0) === 0;
+  const fatal = req.kind === 'las' || planned.counts.valid === 0;
   if (planned.problems.length && (!req.skipInvalid || fatal)) {
     throw new HttpError(
       422,
@@ -290,9 +298,9 @@ export async function runImport(db: Db, req: ImportRequest, progress: Progress =
       { duplicateOf },
     );
   }
-  if (duplicateOf && req.onDuplicate === 'skip') return { dryRun: false, skipped: true, ...summary };
+  if (duplicateOf && req.onDuplicate === 'skip') return { dryRun: false, skipped: true, ...summary } satisfies ImportCommit;
 
-  const outcome = await db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx): Promise<ImportOutcome> => {
     const [upload] = await tx
       .insert(uploads)
       .values({
@@ -325,10 +333,10 @@ export async function runImport(db: Db, req: ImportRequest, progress: Progress =
     await tx.update(uploads).set({ outcome: result }).where(eq(uploads.id, upload.id));
     return { uploadId: upload.id, ...result };
   });
-  return { dryRun: false, skipped: false, ...summary, outcome };
+  return { dryRun: false, skipped: false, ...summary, outcome } satisfies ImportCommit;
 }
 
-export async function listUploads(db: Db, teamId: string, limit = 100) {
+export async function listUploads(db: Db, teamId: string, limit = 100): Promise<UploadRecord[]> {
   const rows = await db
     .select({
       id: uploads.id,

@@ -14,7 +14,7 @@ import type { SurfaceExcludedWell, SurfaceQuantity } from '../../../shared/schem
 import type { StationInput } from '../../../shared/trajectory';
 import type { Db } from '../../db/client';
 import type { Progress } from '../../lib/jobs';
-import type { SurfaceInputPoint } from './computeSurface';
+import type { SurfaceInputPoint } from '../../../shared/interpolation/surface';
 
 /** A candidate well as the surfaces service reads it: location, datums and its newest accepted interpretation. */
 export type WellRow = {

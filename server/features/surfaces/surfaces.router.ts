@@ -3,8 +3,7 @@ import { z } from 'zod';
 import { lonLatSchema } from '../../../shared/schemas/planning';
 import { surfaceRequestBody } from '../../../shared/schemas/surfaces';
 import type { Db } from '../../db/client';
-import { notFound } from '../../lib/httpError';
-import { JobRegistry } from '../../lib/jobs';
+import type { JobRegistry } from '../../lib/jobs';
 import { parse } from '../../lib/parse';
 import { requireTeam, teamIdOf } from '../../middleware/guards';
 import { getPlannedWell } from '../planning/plannedWells.service';
@@ -18,9 +17,8 @@ const pointQuery = z
   .refine((p) => lonLatSchema.safeParse([p.lon, p.lat]).success, 'lon must be within −180..180 and lat within −90..90');
 const asyncQuery = z.object({ async: z.enum(['true', 'false']).optional() });
 
-export function surfacesRouter(db: Db): Router {
+export function surfacesRouter(db: Db, jobs: JobRegistry): Router {
   const r = Router({ mergeParams: true });
-  const jobs = new JobRegistry();
 
   r.post('/:teamId/prospects/:id/surfaces', requireTeam('surfaces.run'), async (req, res) => {
     const { id } = parse(prospectParams, req.params);
@@ -28,16 +26,10 @@ export function surfacesRouter(db: Db): Router {
     const run = (progress?: Parameters<typeof createSurface>[5]) =>
       createSurface(db, teamIdOf(req), req.session!.user.id, id, params, progress);
     if (parse(asyncQuery, req.query).async === 'true') {
-      res.status(202).json({ jobId: jobs.start(teamIdOf(req), run).id });
+      res.status(202).json({ jobId: jobs.start(teamIdOf(req), 'surface', run).id });
       return;
     }
     res.status(201).json(await run());
-  });
-  r.get('/:teamId/surface-jobs/:jobId', requireTeam('team.read'), (req, res) => {
-    const job = jobs.get(teamIdOf(req), String(req.params.jobId));
-    if (!job) throw notFound('That surface job');
-    const { teamId: _t, ...rest } = job;
-    res.json(rest);
   });
   r.get('/:teamId/prospects/:id/surfaces', requireTeam('team.read'), async (req, res) => {
     res.json(await listSurfaces(db, teamIdOf(req), parse(prospectParams, req.params).id));

@@ -18,7 +18,7 @@ import type { Progress } from '../../lib/jobs';
 import { getPlannedWell } from '../planning/plannedWells.service';
 import { getProspect } from '../prospects/prospects.service';
 import { profileWellOf, valuesAtDepth, type WellRow } from './atDepth.service';
-import type { SurfaceInputPoint } from './computeSurface';
+import type { SurfaceInputPoint } from '../../../shared/interpolation/surface';
 import { runSurfaceInWorker } from './runInWorker';
 
 type Params = z.output<typeof surfaceRequestBody>;

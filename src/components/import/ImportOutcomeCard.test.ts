@@ -1,7 +1,7 @@
 // @vitest-environment happy-dom
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { flushPromises } from '@vue/test-utils';
-import type { ImportCommit } from '@/api/imports';
+import type { ImportCommit } from '@shared/schemas/imports';
 import { installFakeServer, jsonReply, TEAM_A, twoTeamSession } from '@/testing/fakeServer';
 import { mountInApp } from '@/testing/mountInApp';
 import ImportOutcomeCard from './ImportOutcomeCard.vue';

@@ -1,7 +1,8 @@
 import { formatProblem } from '@shared/formats/problem';
 import { IMPORT_FIELDS, UNITS_FOR_QUANTITY, type CsvImportKind, type ImportField } from '@shared/imports/fields';
 import type { ImportKind } from '@shared/schemas/imports';
-import type { CsvFacts, ImportPreview, ImportProblem, ImportRequest, PreviewRow } from '@/api/imports';
+import type { CsvFacts, ImportPreview, ImportProblem, PreviewRow } from '@shared/schemas/imports';
+import type { ImportRequest } from '@/api/imports';
 
 export const IMPORT_KIND_LABELS: Record<ImportKind, string> = {
   wells: 'Well headers',

@@ -1,7 +1,7 @@
 import type { CsvImportKind } from '@shared/imports/fields';
 import { PRESSURE_KIND_LABELS, type PressureKind, type PressureQuality } from '@shared/schemas/wells';
 import { PRESSURE_QUALITY_LABELS } from '@/components/well/wellLabels';
-import type { PreviewRow } from '@/api/imports';
+import type { PreviewRow } from '@shared/schemas/imports';
 import type { UnitPreferences } from '@/stores/units';
 import { doglegIn, doglegUnit, formatDepth, formatEmw, formatNumber, formatPressure, MISSING, unitLabel } from '@/utils/quantities';
 

@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { leaveOneOut } from '../../../shared/interpolation';
 import { hiddenTopTvdssM } from '../../../server/db/seed/demoBasin/surfaces';
 import { demoTopPick } from '../../../server/db/seed/demoBasin/writeInterpretations';
-import { computeSurface, SurfaceInputError, type SurfaceInputPoint } from '../../../server/features/surfaces/computeSurface';
+import { computeSurface, type SurfaceInputPoint } from '../../../shared/interpolation/surface';
 import { surfaceRequestBody } from '../../../shared/schemas/surfaces';
 import { demo } from '../demoBasin/demoData';
 
@@ -166,111 +166,6 @@ describe('TOP surface of the demo basin against its hidden truth', () => {
       }
       expect(turf.area(inner)).toBeLessThanOrEqual(turf.area(outer));
     }
-  });
-});
-
-describe('bad input', () => {
-  const three = picks.slice(0, 3);
-  it('needs at least three wells', () => {
-    expect(() => run({ kind: 'idw', power: 2 }, picks.slice(0, 2))).toThrow(
-      new SurfaceInputError('A surface needs at least 3 wells with a value at different locations; found 2.'),
-    );
-  });
-
-  it('merges duplicate locations with a warning', () => {
-    const twin = { ...three[0], wellId: crypto.randomUUID(), name: 'TWIN', value: three[0].value + 100 };
-    const r = run({ kind: 'idw', power: 2 }, [...picks.slice(0, 5), twin]);
-    expect(r.warnings).toContain(`Wells ${three[0].name}, TWIN share a location; their values were averaged.`);
-  });
-
-  it('makes a flat surface with zero variance when all values are equal', () => {
-    const r = run(
-      { kind: 'kriging', model: 'spherical' },
-      picks.slice(0, 6).map((p) => ({ ...p, value: 2500 })),
-    );
-    expect(r.grid.min).toBe(2500);
-    expect(r.grid.max).toBe(2500);
-    expect(r.grid.stdDev!.every((v) => v === null || v === 0)).toBe(true);
-    expect(r.warnings[0]).toMatch(/same value \(2500\): the surface is flat and its kriging variance is zero/);
-  });
-
-  it('refuses a cell size that would make too many cells', () => {
-    expect(() => run({ kind: 'idw', power: 2 }, picks, { cellSizeM: 25 })).toThrow(
-      /^Grid of \d+ × \d+ = \d+ cells exceeds the limit of 250000: choose a larger cell size\.$/,
-    );
-  });
-});
-
-describe('quantities in other units and progress', () => {
-  const variogram = { model: 'exponential' as const, nugget: 100, sill: 60_000, range: 25_000 };
-
-  it('kriges pressures (Pa) exactly as the same numbers in another unit: kriging is linear in the data', () => {
-    // Ordinary kriging weights depend only on the variogram's shape, so multiplying every value by k and the sill and
-    // nugget by k² multiplies estimates by k and variances by k² (Isaaks & Srivastava 1989, ch. 12).
-    const k = 1e4;
-    const depth = run({ kind: 'kriging', variogram });
-    const pressure = run(
-      { kind: 'kriging', variogram: { ...variogram, nugget: variogram.nugget * k * k, sill: variogram.sill * k * k } },
-      picks.map((p) => ({ ...p, value: p.value * k })),
-      { quantity: 'overpressure_at_depth', depthTvdssM: 3000, contourIntervalPa: 1e6 },
-    );
-    depth.grid.values.forEach((v, i) => {
-      if (v === null) expect(pressure.grid.values[i]).toBeNull();
-      else expect(pressure.grid.values[i]! / (v * k)).toBeCloseTo(1, 9);
-    });
-    expect(
-      pressure.grid.stdDev![depth.grid.values.findIndex((v) => v !== null)]! /
-        (depth.grid.stdDev![depth.grid.values.findIndex((v) => v !== null)]! * k),
-    ).toBeCloseTo(1, 9);
-    expect(pressure.crossValidation.rmse / (depth.crossValidation.rmse * k)).toBeCloseTo(1, 9);
-    expect(pressure.variogram!.model.sill).toBeCloseTo(variogram.sill * k * k, 0);
-    expect((pressure.contours.features[0] as { properties: { label: string } }).properties.label).toMatch(/ Pa$/);
-  });
-
-  it('reports progress during the interpolation, not only between phases', () => {
-    const calls: [string, number, number][] = [];
-    computeSurface(
-      {
-        points: picks,
-        outline,
-        params: surfaceRequestBody.parse({ method: { kind: 'kriging', variogram }, cellSizeM: 250, extentBufferKm: 0 }),
-      },
-      (phase, done, total) => calls.push([phase, done, total]),
-    );
-    const during = calls.filter(([phase, done, total]) => phase === 'interpolating' && done > 0 && done < total);
-    expect(during.length).toBeGreaterThan(1);
-    const dones = calls.filter(([phase]) => phase === 'interpolating').map(([, done]) => done);
-    expect(dones).toEqual([...dones].sort((a, b) => a - b));
-  });
-
-  it('asks for the depth of an at-depth quantity, naming the field', () => {
-    const r = surfaceRequestBody.safeParse({ quantity: 'emw_at_depth' });
-    expect(r.success).toBe(false);
-    expect(r.error!.issues[0]).toMatchObject({
-      path: ['depthTvdssM'],
-      message: 'is required for emw_at_depth: the depth below sea level, m',
-    });
-  });
-});
-
-describe('kriging neighbourhood', () => {
-  it('kriges with all wells for a small run by default, so contours have no seams where a neighbour set changes', () => {
-    // With every well in every system the estimate is one smooth function of position: adjacent cells never jump by
-    // more than the surface's slope allows. Compare against the explicit 16-neighbour run on the same picks.
-    const variogram = { model: 'spherical' as const, nugget: 0, sill: 55_000, range: 34_000 };
-    const all = run({ kind: 'kriging', variogram });
-    const nearest = run({ kind: 'kriging', variogram, maxNeighbours: 16 });
-    const everyWell = run({ kind: 'kriging', variogram, maxNeighbours: 64 });
-    expect(all.grid.values).toEqual(everyWell.grid.values);
-    expect(all.grid.values).not.toEqual(nearest.grid.values);
-  });
-
-  it('uses the nearest 16 above 100 wells', async () => {
-    const { krigingNeighbours } = await import('../../../shared/schemas/surfaces');
-    expect(krigingNeighbours(null, 100)).toBeUndefined();
-    expect(krigingNeighbours(null, 101)).toBe(16);
-    expect(krigingNeighbours(8, 54)).toBe(8);
-    expect(krigingNeighbours(64, 54)).toBeUndefined();
   });
 });
 
