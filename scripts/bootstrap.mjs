@@ -76,13 +76,13 @@ async function runApp() {
     PORELITH_DEMO: demo,
   };
   if (mode === 'mail') {
-    await run(tsx, ['server/features/mail/mailLast.cli.ts', ...process.argv.slice(3)], { env, label: 'mail' });
+    await run(tsx, ['server/bin/mailLast.ts', ...process.argv.slice(3)], { env, label: 'mail' });
     cleanUp();
     return;
   }
   const setupArgs = mode === 'seed' ? ['--demo', '--regenerate'] : [];
-  await run(tsx, ['server/db/setup.ts', ...setupArgs], { env, label: 'database' });
-  if (mode === 'admin') await run(tsx, ['server/db/createAdmin.ts', ...process.argv.slice(3)], { env, label: 'first admin' });
+  await run(tsx, ['server/bin/setupDb.ts', ...setupArgs], { env, label: 'database' });
+  if (mode === 'admin') await run(tsx, ['server/bin/createAdmin.ts', ...process.argv.slice(3)], { env, label: 'first admin' });
   if (mode === 'seed' || mode === 'admin') {
     cleanUp();
     return;
@@ -113,9 +113,9 @@ async function runApp() {
   };
   onSignal = () => shutdown(0);
 
-  if (mailFake) launch([tsx, 'server/mail-fake.ts'], 'mail fake');
+  if (mailFake) launch([tsx, 'server/bin/mailFake.ts'], 'mail fake');
   else say(`sending mail through ${process.env.SMTP_HOST}; the local mail fake is not started`);
-  launch([tsx, 'server/index.ts'], 'server');
+  launch([tsx, 'server/bin/serve.ts'], 'server');
   if (mode === 'dev') {
     launch([join(ROOT, 'node_modules', '.bin', 'vite')], 'vite dev server');
   }
@@ -140,7 +140,7 @@ async function withThrowawayDatabase(fn) {
       JWT_SECRET: 'test-secret-' + 'x'.repeat(40),
       LOG_LEVEL: 'silent',
     };
-    await run(tsx, ['server/db/setup.ts', '--demo'], { env, label: 'database' });
+    await run(tsx, ['server/bin/setupDb.ts', '--demo'], { env, label: 'database' });
     return await fn(env);
   } finally {
     cleanUp();

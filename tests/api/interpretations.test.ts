@@ -84,3 +84,66 @@ describe('well interpretations', () => {
     expect((await other.agent.get(url)).status).toBe(403);
   });
 });
+
+describe('the current interpretation, as surfaces and offsets read it', () => {
+  // Three wells with a rig datum 30 m above sea level: TOP TVDSS = TOP TVD below the datum − 30 m.
+  const WELLS = [
+    ['CUR-A', -101.0, -32.5],
+    ['CUR-B', -100.95, -32.55],
+    ['CUR-C', -100.9, -32.48],
+  ] as const;
+  let admin: Awaited<ReturnType<typeof freshTeamAgent>>;
+  let base: string;
+  const ids: Record<string, string> = {};
+
+  beforeAll(async () => {
+    admin = await freshTeamAgent(ctx, 'Current interpretation', 'admin');
+    base = `/api/teams/${admin.teamId}`;
+    const csv = ['name,lon,lat,datum elevation', ...WELLS.map((w) => `${w.join(',')},30`)].join('\n');
+    expect((await admin.agent.post(`${base}/imports`).field('kind', 'wells').attach('file', Buffer.from(csv), 'cur.csv')).status).toBe(201);
+    for (const [name] of WELLS) ids[name] = (await admin.agent.get(`${base}/wells?q=${name}`)).body.items[0].id;
+    const save = (name: string, body: object) => admin.agent.post(`${base}/wells/${ids[name]}/interpretations`).send(body);
+    for (const [name] of WELLS) expect((await save(name, { ...content(2000), baseVersion: null })).status).toBe(201);
+    // A: a newer accepted version supersedes version 1. B: a newer draft does not. C: stays at version 1.
+    expect((await save('CUR-A', { ...content(2600), baseVersion: 1 })).status).toBe(201);
+    expect((await save('CUR-B', { ...content(2900), baseVersion: 1, status: 'draft' })).status).toBe(201);
+  });
+
+  it('feeds the newest accepted version, not an older one or a newer draft, into a TOP surface', async () => {
+    const prospect = await admin.agent.post(`${base}/prospects`).send({
+      name: 'Current-interpretation prospect',
+      geometry: {
+        type: 'Polygon',
+        coordinates: [
+          [
+            [-101.05, -32.6],
+            [-100.85, -32.6],
+            [-100.85, -32.43],
+            [-101.05, -32.43],
+            [-101.05, -32.6],
+          ],
+        ],
+      },
+    });
+    expect(prospect.status).toBe(201);
+    const res = await admin.agent
+      .post(`${base}/prospects/${prospect.body.id}/surfaces`)
+      .send({ wells: { from: 'list', wellIds: Object.values(ids) }, method: { kind: 'idw', power: 2 }, cellSizeM: 1000 });
+    expect(res.status).toBe(201);
+    const byName = Object.fromEntries(res.body.wells.map((w: { name: string }) => [w.name, w]));
+    expect(byName['CUR-A']).toMatchObject({ interpretationVersion: 2, value: 2570 });
+    expect(byName['CUR-B']).toMatchObject({ interpretationVersion: 1, value: 1970 });
+    expect(byName['CUR-C']).toMatchObject({ interpretationVersion: 1, value: 1970 });
+  });
+
+  it('shows the same TOP per offset candidate', async () => {
+    const planned = await admin.agent
+      .post(`${base}/planned-wells`)
+      .send({ name: 'Current-1 (planned)', location: { type: 'Point', coordinates: [-100.97, -32.52] }, plannedTdM: 3000 });
+    expect(planned.status).toBe(201);
+    const res = await admin.agent.get(`${base}/planned-wells/${planned.body.id}/offset-candidates?radiusKm=25`);
+    expect(res.status).toBe(200);
+    const top = Object.fromEntries(res.body.map((c: { name: string; topTvdssM: number | null }) => [c.name, c.topTvdssM]));
+    expect(top).toEqual({ 'CUR-A': 2570, 'CUR-B': 1970, 'CUR-C': 1970 });
+  });
+});

@@ -1,5 +1,5 @@
 import { doublePrecision, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { REFERENCE_LAYER_KINDS } from '../../../shared/schemas/planning';
+import { REFERENCE_LAYER_KINDS, type PlannedWell } from '../../../shared/schemas/planning';
 import { createdAt, id, updatedAt } from './columns';
 import { pointGeometry, polygonGeometry } from './geometry';
 import { teams } from './teams';
@@ -44,7 +44,7 @@ export const plannedWells = pgTable(
     location: pointGeometry().notNull(),
     datumElevationM: doublePrecision().notNull().default(25),
     waterDepthM: doublePrecision(),
-    waterDepthSource: text().notNull().default('entered'),
+    waterDepthSource: text().$type<PlannedWell['waterDepthSource']>().notNull().default('entered'),
     plannedTdM: doublePrecision().notNull(),
     notes: text(),
     createdBy: userRef(),

@@ -1,8 +1,8 @@
-import bcrypt from 'bcryptjs';
 import { and, eq, inArray } from 'drizzle-orm';
 import type { Role } from '../../../shared/auth/permissions';
 import type { Db } from '../client';
 import { memberships, teams, users } from '../schema';
+import { hashPassword } from '../../lib/passwords';
 
 export const DEMO_TEAM = 'Synthetic demo';
 export const DEMO_PASSWORD = 'porelith-demo';
@@ -21,7 +21,7 @@ export async function seedDemoAccounts(db: Db): Promise<string> {
   return db.transaction(async (tx) => {
     await tx.insert(teams).values({ name: DEMO_TEAM }).onConflictDoNothing();
     const [team] = await tx.select().from(teams).where(eq(teams.name, DEMO_TEAM));
-    const hash = await bcrypt.hash(DEMO_PASSWORD, 10);
+    const hash = await hashPassword(DEMO_PASSWORD);
     for (const u of DEMO_USERS) {
       await tx.insert(users).values({ email: u.email, name: u.name, passwordHash: hash }).onConflictDoNothing();
       const [row] = await tx.select({ id: users.id }).from(users).where(eq(users.email, u.email));

@@ -5,10 +5,10 @@ import { acceptTokenBody, resetRequestBody, signInBody, type AuthOptions } from 
 import type { Db } from '../../db/client';
 import type { Env } from '../../env';
 import { unauthenticated } from '../../lib/httpError';
+import { INVITE_DAYS } from '../../lib/linkTokens';
 import { parse } from '../../lib/parse';
 import { endRequestSession, issueSessionCookie } from '../../middleware/session';
 import { isLocalMailFake, type Mailer } from '../mail/mailer';
-import { INVITE_DAYS } from '../teams/teams.service';
 import {
   acceptInvitation,
   inspectInvitation,

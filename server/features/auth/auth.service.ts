@@ -6,13 +6,12 @@ import type { Db } from '../../db/client';
 import { invitations, memberships, passwordResets, revokedSessions, teams, users } from '../../db/schema';
 import { HttpError, badRequest, conflict } from '../../lib/httpError';
 import type { Mailer } from '../mail/mailer';
-import { INVITE_DAYS } from '../teams/teams.service';
-import { hashLinkToken, newLinkToken } from './linkTokens';
+import { INVITE_DAYS, hashLinkToken, newLinkToken } from '../../lib/linkTokens';
+import { BCRYPT_ROUNDS, hashPassword } from '../../lib/passwords';
 import type { SessionClaims, SessionGrant } from './sessionToken';
 
 /** How long a password-reset link works; the reset page says so. */
 export const RESET_MINUTES = 60;
-export const BCRYPT_ROUNDS = 10;
 // Compared against when the user is unknown, so timing does not reveal which e-mails exist.
 const DUMMY_HASH = bcrypt.hashSync('porelith-no-such-user', BCRYPT_ROUNDS);
 
@@ -138,7 +137,7 @@ export async function resetPassword(db: Db, token: string, password: string): Pr
   const [reset] = await db.select().from(passwordResets).where(eq(passwordResets.tokenHash, tokenHash));
   if (!reset || reset.usedAt) throw invalidToken();
   if (reset.expiresAt.getTime() <= Date.now()) throw expiredReset();
-  const hash = await bcrypt.hash(password, BCRYPT_ROUNDS);
+  const hash = await hashPassword(password);
   return db.transaction(async (tx) => {
     // Re-checked here so two tabs using the same link cannot both succeed.
     const [used] = await tx
@@ -173,7 +172,7 @@ export async function acceptInvitation(db: Db, token: string, password: string):
     const ok = await bcrypt.compare(password, existing.hash ?? DUMMY_HASH);
     if (!existing.hash || !ok) throw existingAccountPassword(inv.email);
   }
-  const newHash = existing ? null : await bcrypt.hash(password, BCRYPT_ROUNDS);
+  const newHash = existing ? null : await hashPassword(password);
   return db.transaction(async (tx) => {
     // Re-checked here so two tabs accepting the same link cannot both succeed.
     const [claimed] = await tx

@@ -1,31 +1,17 @@
-import { checkLonLat, toLonLat } from '../../../shared/geo/crs';
 import type { Problem } from '../../../shared/formats/problem';
 import type { MappedRecord } from '../../../shared/imports/mapRows';
 import type { PressureKind, PressureQuality, WellStatus } from '../../../shared/schemas/wells';
 import { computeSurvey, minimumCurvature, type StationInput } from '../../../shared/trajectory';
 import { pressureAndEmw } from './pressureValue';
+import { offshoreFromWaterDepth, placeWell, type PlannedWellFields } from './wellPlacement';
 import { tvdFromSurvey, type WellLookup } from './wellLookup';
 
 /** What a commit will do with each valid record; built without writing anything. */
-export interface WellPlanRow {
+export interface WellPlanRow extends PlannedWellFields {
   line: number;
   existingId: string | null;
-  name: string;
-  uwi: string | null;
-  operator: string | null;
-  lon: number;
-  lat: number;
-  surfaceX: number;
-  surfaceY: number;
-  surfaceEpsg: number;
-  datumElevationM: number | null;
-  datumKind: string | null;
-  groundElevationM: number | null;
-  waterDepthM: number | null;
   airGapM: number | null;
-  offshore: boolean | null;
   spudDate: string | null;
-  tdMdM: number | null;
   tdTvdM: number | null;
   status: WellStatus | null;
   note: string | null;
@@ -132,18 +118,11 @@ export function planWells(
     const x = v.x as number;
     const y = v.y as number;
     let lonLat: { lon: number; lat: number } | null = null;
-    if (typeof x !== 'number' || typeof y !== 'number') {
-      // A coordinate that did not read is already reported by the mapping.
-    } else if (epsg === 4326) {
-      const message = checkLonLat(x, y);
-      if (message) lineProblems.push({ line: r.line, column: message.startsWith('latitude') ? 'y' : 'x', message });
-      else lonLat = { lon: x, lat: y };
-    } else {
-      try {
-        lonLat = toLonLat(x, y, epsg);
-      } catch (err) {
-        lineProblems.push({ line: r.line, column: 'x', message: (err as Error).message });
-      }
+    // A coordinate that did not read is already reported by the mapping.
+    if (typeof x === 'number' && typeof y === 'number') {
+      const placed = placeWell(x, y, epsg);
+      if ('axis' in placed) lineProblems.push({ line: r.line, column: placed.axis, message: placed.message });
+      else lonLat = placed;
     }
     const byName = name ? lookup.find(name) : undefined;
     const byUwi = uwi ? lookup.find(uwi) : undefined;
@@ -181,7 +160,7 @@ export function planWells(
       groundElevationM: num(v.groundElevation),
       waterDepthM,
       airGapM: num(v.airGap),
-      offshore: typeof v.offshore === 'boolean' ? v.offshore : waterDepthM !== null ? waterDepthM > 0 : null,
+      offshore: offshoreFromWaterDepth(waterDepthM, typeof v.offshore === 'boolean' ? v.offshore : null),
       spudDate: str(v.spudDate),
       tdMdM,
       tdTvdM,

@@ -23,7 +23,8 @@ import { planPressures, planSurveys, planTops, planWells } from './csvPlans';
 import type { Progress } from '../../lib/jobs';
 import { removeRowsOfUploads, writeLasCurves, writePressures, writeSurveys, writeTops, writeWells } from './importWriter';
 import { NEIGHBOUR_RADIUS_M, newWellGapsNote, planLas, settleOffshore, type LasPlan } from './lasPlan';
-import { WellLookup, loadSurveys } from './wellLookup';
+import { loadSurveys } from '../wells/surveys';
+import { WellLookup } from './wellLookup';
 
 export const MAX_FILE_BYTES = 50 * 1024 * 1024;
 export const MAX_ROWS = 500_000;

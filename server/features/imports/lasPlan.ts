@@ -1,9 +1,9 @@
-import { checkLonLat, toLonLat } from '../../../shared/geo/crs';
-import type { LasFile } from '../../../shared/formats/las';
+import type { LasFile, LasWellLocation } from '../../../shared/formats/las';
 import { readLasLocation, suggestCurveRole } from '../../../shared/formats/las';
 import type { Problem } from '../../../shared/formats/problem';
 import { CURVE_ROLES, type CurveRole } from '../../../shared/schemas/wells';
 import type { KnownWell, WellLookup } from './wellLookup';
+import { offshoreFromWaterDepth, placeWell, type PlannedWellFields } from './wellPlacement';
 
 export interface LasCurvePlan {
   mnemonic: string;
@@ -16,19 +16,8 @@ export interface LasCurvePlan {
 }
 
 /** The well a LAS file creates when no well of the team matches it, from its own ~W/~P items. */
-export interface LasNewWell {
-  name: string;
-  uwi: string | null;
-  operator: string | null;
-  lon: number;
-  lat: number;
-  surfaceX: number;
-  surfaceY: number;
-  surfaceEpsg: number;
-  datumElevationM: number | null;
+export interface LasNewWell extends PlannedWellFields {
   datumKind: 'KB' | 'DF' | 'RT' | null;
-  groundElevationM: number | null;
-  waterDepthM: number | null;
   /** The deepest depth of the file (the last sample or STOP), m MD: the well is at least this deep. */
   tdMdM: number | null;
   /** Null until settled: from the file (a water depth item), else from the nearest team well (see settleOffshore). */
@@ -65,21 +54,22 @@ function headerLine(las: LasFile, mnemonic: string): number {
  * The well to create from the file's name, UWI/API and location (LATI/LONG, else X/Y in `epsg`), or
  * the reason it cannot be created, naming what is missing.
  */
-function newWellFrom(las: LasFile, uwi: string, epsg: number): { well: LasNewWell | null; problems: Problem[]; missing: string | null } {
+function newWellFrom(
+  las: LasFile,
+  loc: LasWellLocation,
+  uwi: string,
+  epsg: number,
+): { well: LasNewWell | null; problems: Problem[]; missing: string | null } {
   const name = las.well.WELL.trim();
-  const loc = readLasLocation(las);
   const problems: Problem[] = [...loc.problems];
   if (!name) return { well: null, problems, missing: 'the file has no WELL name in ~W to create it under' };
   let at: { lon: number; lat: number; x: number; y: number; epsg: number; from: string } | null = null;
   if (loc.lat && loc.lon) {
-    const message = checkLonLat(loc.lon.value, loc.lat.value);
-    if (message)
-      problems.push({
-        line: (message.startsWith('latitude') ? loc.lat : loc.lon).line,
-        column: (message.startsWith('latitude') ? loc.lat : loc.lon).mnemonic,
-        message,
-      });
-    else {
+    const placed = placeWell(loc.lon.value, loc.lat.value, 4326);
+    if ('axis' in placed) {
+      const item = placed.axis === 'y' ? loc.lat : loc.lon;
+      problems.push({ line: item.line, column: item.mnemonic, message: placed.message });
+    } else {
       // Other geodetic datums differ from WGS 84 by up to a few hundred metres: fine for screening, worth saying.
       const datum =
         loc.geodeticDatum && !/WGS\s*-?\s*84/i.test(loc.geodeticDatum) ? `, read as WGS 84 although GDAT says "${loc.geodeticDatum}"` : '';
@@ -101,18 +91,16 @@ function newWellFrom(las: LasFile, uwi: string, epsg: number): { well: LasNewWel
         message: `the file gives ${loc.x.mnemonic}/${loc.y.mnemonic} but no LATI/LONG: choose the EPSG code of ${loc.x.mnemonic}/${loc.y.mnemonic} to create well "${name}"`,
       });
     } else {
-      try {
-        const ll = toLonLat(loc.x.value, loc.y.value, epsg);
+      const placed = placeWell(loc.x.value, loc.y.value, epsg);
+      if ('axis' in placed) problems.push({ line: loc.x.line, column: loc.x.mnemonic, message: placed.message });
+      else
         at = {
-          ...ll,
+          ...placed,
           x: loc.x.value,
           y: loc.y.value,
           epsg,
           from: `${loc.x.mnemonic}/${loc.y.mnemonic} in EPSG:${epsg} (lines ${loc.x.line}, ${loc.y.line})`,
         };
-      } catch (err) {
-        problems.push({ line: loc.x.line, column: loc.x.mnemonic, message: (err as Error).message });
-      }
     }
   }
   if (!at) {
@@ -143,7 +131,7 @@ function newWellFrom(las: LasFile, uwi: string, epsg: number): { well: LasNewWel
       groundElevationM: loc.groundElevation?.value ?? null,
       waterDepthM: loc.waterDepth?.value ?? null,
       tdMdM: deepestMdM(las),
-      offshore: loc.waterDepth ? loc.waterDepth.value > 0 : null,
+      offshore: offshoreFromWaterDepth(loc.waterDepth?.value ?? null),
       offshoreFrom: loc.waterDepth ? `${loc.waterDepth.mnemonic} (line ${loc.waterDepth.line})` : '',
       locationFrom: at.from,
     },
@@ -222,9 +210,10 @@ export function planLas(
     if (well) matchedBy = 'name';
   }
   const wellLabel = las.well.WELL.trim() || uwi || '(no WELL in ~W)';
+  const loc = readLasLocation(las);
   let createWell: LasNewWell | null = null;
   if (!well) {
-    const created = newWellFrom(las, uwi, epsg);
+    const created = newWellFrom(las, loc, uwi, epsg);
     createWell = created.well;
     problems.push(...created.problems);
     if (createWell) {
@@ -268,10 +257,7 @@ export function planLas(
     createWell,
     wellLabel,
     matchedBy,
-    xyOnly: (() => {
-      const loc = readLasLocation(las);
-      return !!(loc.x && loc.y && !loc.lat && !loc.lon);
-    })(),
+    xyOnly: !!(loc.x && loc.y && !loc.lat && !loc.lon),
     indexUnit: las.index.rawUnit,
     topMdM: md.length ? md[0] : NaN,
     baseMdM: md.length ? md[md.length - 1] : NaN,

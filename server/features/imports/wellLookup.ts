@@ -1,10 +1,8 @@
-import { eq, inArray } from 'drizzle-orm';
-import type { StationInput, SurveySource } from '../../../shared/trajectory';
+import { eq } from 'drizzle-orm';
+import type { SurveySource } from '../../../shared/trajectory';
 import { tvdAt } from '../../../shared/trajectory';
 import type { Db } from '../../db/client';
-
-type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
-import { surveyStations, wells } from '../../db/schema';
+import { wells } from '../../db/schema';
 
 export interface KnownWell {
   id: string;
@@ -34,23 +32,6 @@ export class WellLookup {
   find(nameOrUwi: string): KnownWell | undefined {
     return this.byKey.get(nameOrUwi.trim().toLowerCase());
   }
-}
-
-/** Survey stations of the given wells, for TVD from MD (a well without a survey is vertical). */
-export async function loadSurveys(db: Db | Tx, wellIds: string[]): Promise<Map<string, StationInput[]>> {
-  const out = new Map<string, StationInput[]>();
-  if (wellIds.length === 0) return out;
-  const rows = await db
-    .select({ wellId: surveyStations.wellId, mdM: surveyStations.mdM, incDeg: surveyStations.incDeg, aziDeg: surveyStations.aziDeg })
-    .from(surveyStations)
-    .where(inArray(surveyStations.wellId, wellIds))
-    .orderBy(surveyStations.wellId, surveyStations.seq);
-  for (const r of rows) {
-    const list = out.get(r.wellId) ?? [];
-    list.push({ mdM: r.mdM, incDeg: r.incDeg, aziDeg: r.aziDeg });
-    out.set(r.wellId, list);
-  }
-  return out;
 }
 
 /** TVD below the rig datum at `mdM` along the well's survey; MD itself for a vertical well. */

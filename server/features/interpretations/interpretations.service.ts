@@ -1,34 +1,18 @@
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, desc, eq, getTableColumns, sql } from 'drizzle-orm';
 import { interpretationContentSchema, type Interpretation, type InterpretationContent } from '../../../shared/schemas/interpretations';
 import type { Db } from '../../db/client';
 import { interpretations, users, wells } from '../../db/schema';
 import { conflict, notFound } from '../../lib/httpError';
 import { UNIQUE_VIOLATION, pgErrorCode } from '../../lib/pgError';
+import { currentInterpretationOf } from './currentInterpretation';
 
-const columns = {
-  id: interpretations.id,
-  wellId: interpretations.wellId,
-  version: interpretations.version,
-  status: interpretations.status,
-  content: interpretations.content,
-  note: interpretations.note,
-  restoredFrom: interpretations.restoredFrom,
-  createdBy: interpretations.createdBy,
-  createdByName: users.name,
-  createdAt: interpretations.createdAt,
-};
-type Row = { [K in keyof typeof columns]: unknown };
-const toInterpretation = (r: Row): Interpretation => ({
-  ...(r.content as InterpretationContent),
-  id: r.id as string,
-  wellId: r.wellId as string,
-  version: r.version as number,
-  status: r.status as Interpretation['status'],
-  note: (r.note as string | null) ?? null,
-  restoredFrom: (r.restoredFrom as number | null) ?? null,
-  createdBy: (r.createdBy as string | null) ?? null,
-  createdByName: (r.createdByName as string | null) ?? null,
-  createdAt: (r.createdAt as Date).toISOString(),
+const columns = { ...getTableColumns(interpretations), createdByName: users.name };
+type Row = typeof interpretations.$inferSelect & { createdByName: string | null };
+const toInterpretation = ({ content, createdAt, createdByName, ...r }: Row): Interpretation => ({
+  ...content,
+  ...r,
+  createdByName,
+  createdAt: createdAt.toISOString(),
 });
 
 async function assertWell(db: Db, teamId: string, wellId: string) {
@@ -50,16 +34,15 @@ export async function listInterpretations(db: Db, teamId: string, wellId: string
   return rows.map(toInterpretation);
 }
 
-/** The newest accepted version: what maps, surfaces and exports use. */
+/** The newest accepted version (the rule of `currentInterpretationOf`): what maps, surfaces and exports use. */
 export async function currentInterpretation(db: Db, teamId: string, wellId: string): Promise<Interpretation> {
   await assertWell(db, teamId, wellId);
+  const current = currentInterpretationOf(db, wellId);
+  const { topTvdM: _top, ...fields } = current._.selectedFields;
   const [row] = await db
-    .select(columns)
-    .from(interpretations)
-    .leftJoin(users, eq(users.id, interpretations.createdBy))
-    .where(and(eq(interpretations.wellId, wellId), eq(interpretations.status, 'accepted')))
-    .orderBy(desc(interpretations.version))
-    .limit(1);
+    .select({ ...fields, createdByName: users.name })
+    .from(current)
+    .leftJoin(users, eq(users.id, current.createdBy));
   if (!row) throw notFound('An accepted interpretation of this well');
   return toInterpretation(row);
 }

@@ -3,6 +3,7 @@ import { OFFSET_SCORE_WEIGHTS as W, type OffsetCandidate, type OffsetSetBody, ty
 import type { Db } from '../../db/client';
 import { offsetPicks, users, wells } from '../../db/schema';
 import { badRequest } from '../../lib/httpError';
+import { currentInterpretationOf } from '../interpretations/currentInterpretation';
 import { getProspect } from '../prospects/prospects.service';
 import { getPlannedWell } from './plannedWells.service';
 
@@ -126,6 +127,7 @@ async function candidateRows(
   const inSet = plannedWellId
     ? sql`EXISTS (SELECT 1 FROM offset_picks o WHERE o.planned_well_id = ${plannedWellId} AND o.well_id = w.id)`
     : sql`false`;
+  const current = currentInterpretationOf(db, sql`w.id`);
   const rows = await db.execute<CandidateRow>(sql`
     SELECT w.id, w.name, w.uwi, w.status::text, ST_X(w.location) AS lon, ST_Y(w.location) AS lat,
       ${distance ?? sql`ST_Distance(w.location::geography, ${here}::geography)`} AS distance_m,
@@ -136,9 +138,9 @@ async function candidateRows(
       EXISTS (SELECT 1 FROM pressure_observations p WHERE p.well_id = w.id AND p.kind IN ('lot', 'fit')) AS has_lot,
       EXISTS (SELECT 1 FROM survey_stations s WHERE s.well_id = w.id) AS has_survey,
       ${inSet} AS in_set,
-      (SELECT (i.content->'top'->>'tvdM')::float8 - w.datum_elevation_m FROM interpretations i
-        WHERE i.well_id = w.id AND i.status = 'accepted' ORDER BY i.version DESC LIMIT 1) AS top_tvdss_m
+      ${current.topTvdM} - w.datum_elevation_m AS top_tvdss_m
     FROM wells w
+    LEFT JOIN LATERAL ${current} ON true
     WHERE w.team_id = ${teamId} AND ${area}
     ORDER BY distance_m
     LIMIT 500`);

@@ -18,11 +18,12 @@ const columns = {
   version: plannedWells.version,
   updatedAt: plannedWells.updatedAt,
 };
-type Row = { [K in keyof typeof columns]: unknown };
-const toPlanned = (r: Row): PlannedWell => ({
-  ...(r as unknown as PlannedWell),
-  location: JSON.parse(r.location as string),
-  updatedAt: (r.updatedAt as Date).toISOString(),
+const selectPlannedWells = (db: Db) => db.select(columns).from(plannedWells);
+type Row = Awaited<ReturnType<typeof selectPlannedWells>>[number];
+const toPlanned = ({ location, updatedAt, ...r }: Row): PlannedWell => ({
+  ...r,
+  location: JSON.parse(location) as PlannedWell['location'],
+  updatedAt: updatedAt.toISOString(),
 });
 
 const NEAREST = 5;
@@ -57,7 +58,7 @@ async function assertProspect(db: Db, teamId: string, prospectId: string | null 
     ]);
 }
 
-async function values(db: Db, teamId: string, body: PlannedWellBody) {
+async function values(db: Db, teamId: string, body: PlannedWellBody): Promise<Omit<typeof plannedWells.$inferInsert, 'teamId'>> {
   await assertProspect(db, teamId, body.prospectId);
   const [lon, lat] = body.location.coordinates;
   const entered = body.waterDepthM ?? null;
@@ -75,14 +76,11 @@ async function values(db: Db, teamId: string, body: PlannedWellBody) {
 }
 
 export async function listPlannedWells(db: Db, teamId: string): Promise<PlannedWell[]> {
-  return (await db.select(columns).from(plannedWells).where(eq(plannedWells.teamId, teamId)).orderBy(plannedWells.name)).map(toPlanned);
+  return (await selectPlannedWells(db).where(eq(plannedWells.teamId, teamId)).orderBy(plannedWells.name)).map(toPlanned);
 }
 
 export async function getPlannedWell(db: Db, teamId: string, id: string): Promise<PlannedWell> {
-  const [row] = await db
-    .select(columns)
-    .from(plannedWells)
-    .where(and(eq(plannedWells.teamId, teamId), eq(plannedWells.id, id)));
+  const [row] = await selectPlannedWells(db).where(and(eq(plannedWells.teamId, teamId), eq(plannedWells.id, id)));
   if (!row) throw notFound('That planned well');
   return toPlanned(row);
 }

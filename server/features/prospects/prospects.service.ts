@@ -18,24 +18,22 @@ const columns = {
   updatedAt: prospects.updatedAt,
 };
 
-type Row = { [K in keyof typeof columns]: unknown };
-const toProspect = (r: Row): Prospect => ({
-  ...(r as unknown as Prospect),
-  geometry: JSON.parse(r.geometry as string),
-  updatedAt: (r.updatedAt as Date).toISOString(),
+const selectProspects = (db: Db) => db.select(columns).from(prospects);
+type Row = Awaited<ReturnType<typeof selectProspects>>[number];
+const toProspect = ({ geometry, updatedAt, ...r }: Row): Prospect => ({
+  ...r,
+  geometry: JSON.parse(geometry) as Prospect['geometry'],
+  updatedAt: updatedAt.toISOString(),
 });
 
 const outline = (body: ProspectBody) => sql`ST_SetSRID(ST_GeomFromGeoJSON(${JSON.stringify(body.geometry)}), 4326)`;
 
 export async function listProspects(db: Db, teamId: string): Promise<Prospect[]> {
-  return (await db.select(columns).from(prospects).where(eq(prospects.teamId, teamId)).orderBy(prospects.name)).map(toProspect);
+  return (await selectProspects(db).where(eq(prospects.teamId, teamId)).orderBy(prospects.name)).map(toProspect);
 }
 
 export async function getProspect(db: Db, teamId: string, id: string): Promise<Prospect> {
-  const [row] = await db
-    .select(columns)
-    .from(prospects)
-    .where(and(eq(prospects.teamId, teamId), eq(prospects.id, id)));
+  const [row] = await selectProspects(db).where(and(eq(prospects.teamId, teamId), eq(prospects.id, id)));
   if (!row) throw notFound('That prospect');
   return toProspect(row);
 }
@@ -47,7 +45,7 @@ export async function createProspect(db: Db, teamId: string, userId: string, bod
     .values({
       teamId,
       name: body.name,
-      outline: outline(body) as unknown as string,
+      outline: outline(body),
       targetTopM: body.targetTopM ?? null,
       targetBaseM: body.targetBaseM ?? null,
       notes: body.notes ?? null,
@@ -70,7 +68,7 @@ export async function updateProspect(
     .update(prospects)
     .set({
       name: body.name,
-      outline: outline(body) as unknown as string,
+      outline: outline(body),
       targetTopM: body.targetTopM ?? null,
       targetBaseM: body.targetBaseM ?? null,
       notes: body.notes ?? null,

@@ -1,5 +1,5 @@
 import { FT_M } from '../../../shared/units';
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, desc, eq, sql, type SQL } from 'drizzle-orm';
 import type { z } from 'zod';
 import {
   AT_DEPTH_QUANTITIES,
@@ -15,6 +15,7 @@ import type { Db } from '../../db/client';
 import { surfaces, users } from '../../db/schema';
 import { badRequest, notFound } from '../../lib/httpError';
 import type { Progress } from '../../lib/jobs';
+import { currentInterpretationOf } from '../interpretations/currentInterpretation';
 import { getPlannedWell } from '../planning/plannedWells.service';
 import { getProspect } from '../prospects/prospects.service';
 import { profileWellOf, valuesAtDepth, type WellRow } from './atDepth.service';
@@ -25,14 +26,17 @@ type Params = z.output<typeof surfaceRequestBody>;
 
 type Candidate = WellRow & { top_tvd_m: number | null };
 
-/** Each well with its newest accepted interpretation (its TOP, if any, and the whole content for profiles). */
-const withTop = (where: ReturnType<typeof sql>) => sql`
+/** Each well with its current interpretation (its TOP, if any, and the whole content for profiles). */
+const withTop = (db: Db, where: SQL) => {
+  const i = currentInterpretationOf(db, sql`w.id`);
+  return sql`
   SELECT w.id, w.name, ST_X(w.location) AS lon, ST_Y(w.location) AS lat, w.datum_elevation_m, w.water_depth_m,
-    w.air_gap_m, w.ground_elevation_m, w.offshore, i.version, i.content, (i.content->'top'->>'tvdM')::float8 AS top_tvd_m
+    w.air_gap_m, w.ground_elevation_m, w.offshore, ${i.version} AS version, ${i.content} AS content, ${i.topTvdM} AS top_tvd_m
   FROM wells w
-  LEFT JOIN LATERAL (SELECT version, content FROM interpretations WHERE well_id = w.id AND status = 'accepted' ORDER BY version DESC LIMIT 1) i ON true
+  LEFT JOIN LATERAL ${i} ON true
   WHERE ${where}
   ORDER BY w.name`;
+};
 
 const listNames = (wells: { name: string }[]) =>
   `${wells
@@ -46,6 +50,7 @@ async function candidates(db: Db, teamId: string, prospectId: string, params: Pa
     const rows = (
       await db.execute<Candidate>(
         withTop(
+          db,
           sql`w.team_id = ${teamId} AND ST_DWithin(w.location::geography, (SELECT outline FROM prospects WHERE id = ${prospectId})::geography, ${src.bufferKm * 1000})`,
         ),
       )
@@ -58,7 +63,7 @@ async function candidates(db: Db, teamId: string, prospectId: string, params: Pa
     await getPlannedWell(db, teamId, src.plannedWellId);
     const rows = (
       await db.execute<Candidate>(
-        withTop(sql`w.team_id = ${teamId} AND w.id IN (SELECT well_id FROM offset_picks WHERE planned_well_id = ${src.plannedWellId})`),
+        withTop(db, sql`w.team_id = ${teamId} AND w.id IN (SELECT well_id FROM offset_picks WHERE planned_well_id = ${src.plannedWellId})`),
       )
     ).rows;
     if (rows.length === 0) throw badRequest('no_wells', 'That planned well has no offset wells picked yet.');
@@ -67,6 +72,7 @@ async function candidates(db: Db, teamId: string, prospectId: string, params: Pa
   const rows = (
     await db.execute<Candidate>(
       withTop(
+        db,
         sql`w.team_id = ${teamId} AND w.id IN (${sql.join(
           src.wellIds.map((i) => sql`${i}::uuid`),
           sql`, `,

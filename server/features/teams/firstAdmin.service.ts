@@ -1,11 +1,10 @@
 import { randomBytes } from 'node:crypto';
-import bcrypt from 'bcryptjs';
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
 import type { Db } from '../../db/client';
 import { memberships, teams, users } from '../../db/schema';
 import { HttpError } from '../../lib/httpError';
-import { BCRYPT_ROUNDS } from '../auth/auth.service';
+import { hashPassword } from '../../lib/passwords';
 
 export const firstAdminInput = z.object({
   email: z.string().trim().toLowerCase().email('must be an e-mail address'),
@@ -35,7 +34,7 @@ export async function createFirstAdmin(
       password = randomBytes(12).toString('base64url');
       const [row] = await tx
         .insert(users)
-        .values({ email: input.email, name: input.name, passwordHash: await bcrypt.hash(password, BCRYPT_ROUNDS) })
+        .values({ email: input.email, name: input.name, passwordHash: await hashPassword(password) })
         .returning({ id: users.id });
       userId = row.id;
     }

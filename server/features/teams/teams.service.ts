@@ -6,10 +6,8 @@ import type { InviteBody, Member, PendingInvitation } from '../../../shared/sche
 import type { Db } from '../../db/client';
 import { invitations, memberships, teams, users } from '../../db/schema';
 import { conflict, HttpError, notFound } from '../../lib/httpError';
-import { newLinkToken } from '../auth/linkTokens';
+import { INVITE_DAYS, newLinkToken } from '../../lib/linkTokens';
 import type { Mailer } from '../mail/mailer';
-
-export const INVITE_DAYS = 7;
 
 export async function listMembers(db: Db, teamId: string): Promise<Member[]> {
   const rows = await db

@@ -3,7 +3,7 @@ import { tvdAt } from '../../../shared/trajectory';
 import type { Db } from '../../db/client';
 import { wells } from '../../db/schema';
 import { bulkUpdate } from '../../lib/bulkInsert';
-import { loadSurveys } from '../imports/wellLookup';
+import { loadSurveys } from './surveys';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 

@@ -24,7 +24,7 @@ function importRows(name: string, kind: CsvImportKind) {
 }
 
 describe('demo import fixtures', () => {
-  it('are committed exactly as the generator writes them (rerun writeFixtures.ts after a change)', () => {
+  it('are committed exactly as the generator writes them (rerun server/bin/writeDemoFixtures.ts after a change)', () => {
     for (const name of FIXTURE_FILES) expect(read(name), name).toBe(files[name]);
   });
 

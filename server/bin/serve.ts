@@ -1,10 +1,10 @@
-// Entry point: parse the environment, connect, listen. Everything else is in createApp().
-import { createApp } from './app';
-import { createDb } from './db/client';
-import { demoAccountsExist } from './db/seed/demoAccounts';
-import { loadEnvOrExit } from './env';
-import { createMailer } from './features/mail/mailer';
-import { createLogger } from './lib/logger';
+// Entry point of the API server (`npm start` runs it): parse the environment, connect, listen. Everything else is in createApp().
+import { createApp } from '../app';
+import { createDb } from '../db/client';
+import { demoAccountsExist } from '../db/seed/demoAccounts';
+import { loadEnvOrExit } from '../env';
+import { createMailer } from '../features/mail/mailer';
+import { createLogger } from '../lib/logger';
 
 const env = loadEnvOrExit();
 const logger = createLogger(env.LOG_LEVEL);

@@ -1,10 +1,10 @@
 // `npm run admin:create -- --email … --name … --team …`: the first admin of an install run without the demo
 // accounts (PORELITH_DEMO=0). Prints a one-time password once; nothing else shows it again.
 import { parseArgs } from 'node:util';
-import { firstAdminInput, createFirstAdmin } from '../features/teams/firstAdmin.service';
+import { createDb } from '../db/client';
+import { applyMigrations } from '../db/migrate';
 import { loadEnvOrExit } from '../env';
-import { createDb } from './client';
-import { applyMigrations } from './migrate';
+import { firstAdminInput, createFirstAdmin } from '../features/teams/firstAdmin.service';
 
 const { values } = parseArgs({
   options: { email: { type: 'string' }, name: { type: 'string' }, team: { type: 'string' } },

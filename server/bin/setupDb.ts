@@ -1,21 +1,15 @@
-// Entry point run by the bootstrap: migrations, then (when PORELITH_DEMO is on, or with --demo) the
-// idempotent demo seed: the demo accounts and the synthetic demo basin in the demo team.
-// --regenerate writes the basin anew. With the demo off nothing demo is created, so accounts an admin
-// removed stay removed.
+// Entry point run by the bootstrap before the app starts: `tsx server/bin/setupDb.ts [--demo] [--regenerate]`.
+// The demo seed runs when PORELITH_DEMO is on or with --demo; --regenerate writes the demo basin anew.
+import { createDb } from '../db/client';
+import { prepareDatabase } from '../db/prepare';
 import { loadEnvOrExit } from '../env';
-import { createDb } from './client';
-import { applyMigrations } from './migrate';
-import { seedDemoAccounts } from './seed/demoAccounts';
-import { seedDemoBasin } from './seed/demoBasin/write';
 
 const env = loadEnvOrExit();
 const db = createDb(env.DATABASE_URL, 2);
 try {
-  await applyMigrations(db);
   const demo = env.PORELITH_DEMO || process.argv.includes('--demo');
-  if (demo) {
-    const teamId = await seedDemoAccounts(db);
-    const basin = await seedDemoBasin(db, teamId, { regenerate: process.argv.includes('--regenerate') });
+  const { basin } = await prepareDatabase(db, { demo, regenerate: process.argv.includes('--regenerate') });
+  if (basin) {
     console.log(
       basin.written
         ? `[porelith] synthetic demo basin written: ${basin.wells} wells, ${basin.pressures} pressure observations, ${basin.logCurves} log curves (${(basin.ms / 1000).toFixed(1)} s)`

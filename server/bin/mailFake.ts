@@ -1,7 +1,7 @@
 // Entry point: the local mail fake that `npm start` runs beside the app.
-import { createDb } from './db/client';
-import { loadEnvOrExit } from './env';
-import { startMailFake } from './features/mail/mailFake';
+import { createDb } from '../db/client';
+import { loadEnvOrExit } from '../env';
+import { startMailFake } from '../features/mail/mailFake';
 
 const env = loadEnvOrExit();
 const db = createDb(env.DATABASE_URL, 2);

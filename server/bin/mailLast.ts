@@ -1,10 +1,10 @@
 // `npm run mail:last -- --to someone@example.org`: prints the newest message the local mail fake kept for
 // that address (a password-reset or invitation link), for whoever runs Porelith on this machine.
 import { parseArgs } from 'node:util';
-import { emailSchema } from '../../../shared/schemas/auth';
-import { createDb } from '../../db/client';
-import { loadEnvOrExit } from '../../env';
-import { formatMail, newestMailTo } from './lastMail';
+import { emailSchema } from '../../shared/schemas/auth';
+import { createDb } from '../db/client';
+import { loadEnvOrExit } from '../env';
+import { formatMail, newestMailTo } from '../features/mail/lastMail';
 
 const { values } = parseArgs({ options: { to: { type: 'string' } }, allowPositionals: false });
 const to = emailSchema.safeParse(values.to ?? '');
