@@ -60,7 +60,7 @@ export interface CompactionScreenInput {
   zeta?: number;
 }
 
-/** Defaults for `compactionScreen` (typical values as listed in REFERENCES.md; common practice, no source). */
+/** Defaults for `compactionScreen` (typical values, docs/sources.md [diffusion]; common practice, no source). */
 export const COMPACTION_SCREEN_DEFAULTS = {
   fluidCompressibilityPerPa: 4.5e-10,
   rockCompressibilityPerPa: 1e-9,

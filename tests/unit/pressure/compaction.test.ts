@@ -12,7 +12,7 @@ describe('diffusionTime', () => {
   });
 
   it('1 mD drains 100 m in about a year or less', () => {
-    // REFERENCES.md "Disequilibrium compaction": L = 100 m, k ≈ 1 mD → about a year or less.
+    // Fact of the trade (docs/sources.md [diffusion]): L = 100 m, k ≈ 1 mD → about a year or less.
     for (const rockCompressibilityPerPa of [1e-10, 1e-9]) {
       const tau = diffusionTime({ ...base, rockCompressibilityPerPa, permeabilityM2: convert(1, 'mD', 'm2') });
       expect(years(tau)).toBeLessThanOrEqual(1);
@@ -20,7 +20,7 @@ describe('diffusionTime', () => {
   });
 
   it('10 nD takes 1e4–1e5 years', () => {
-    // REFERENCES.md: k ≈ 10 nD → 10⁴–10⁵ years. With βr = 1e-9 (soft shale) τ ≈ 35,000 yr; with the
+    // docs/sources.md [diffusion]: k ≈ 10 nD → 10⁴–10⁵ years. With βr = 1e-9 (soft shale) τ ≈ 35,000 yr; with the
     // stiff end βr = 1e-10 it is ≈ 6,100 yr, so the stated range is an order of magnitude, not a bound.
     const soft = years(diffusionTime({ ...base, rockCompressibilityPerPa: 1e-9, permeabilityM2: convert(10, 'nD', 'm2') }));
     const stiff = years(diffusionTime({ ...base, rockCompressibilityPerPa: 1e-10, permeabilityM2: convert(10, 'nD', 'm2') }));
@@ -57,7 +57,7 @@ describe('compactionScreen', () => {
     expect(r.excessRatio).toBeCloseTo(gibsonExcessRatio({ T: r.T, zeta: 0 }), 12);
   });
 
-  it('sorts the regimes by Gibson T (≲ 0.1 drained, ≳ 1 retained; REFERENCES.md)', () => {
+  it('sorts the regimes by Gibson T (≲ 0.1 drained, ≳ 1 retained; Gibson 1958, docs/sources.md [gibson1958])', () => {
     const sand = compactionScreen({ ...shale, sedimentationRateMPerMyr: 500, permeabilityM2: convert(1, 'mD', 'm2') });
     expect(sand.T).toBeLessThan(0.1);
     expect(sand.verdict).toBe('likely-drained');
