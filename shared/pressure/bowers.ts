@@ -3,40 +3,45 @@ import type { Numeric, ResultOf } from '../units/convert';
 import { commonLength, mapSamples, param, sampleAt } from './inputs';
 
 /**
- * Bowers (1995), SPE Drilling & Completion 10(2), 89–95, in its published units: V = V0 + A·σ^B with
- * V and V0 in ft/s and σ in psi, so A is in (ft/s)/psi^B. The functions below take and return SI
- * (m/s, Pa) and keep the coefficients in the published units, so calibrated values from the paper
- * and from field studies can be typed in unchanged. The A = 4.4561, B = 0.8168, U = 3.13 in the
- * examples are Gulf of Mexico calibrations attributed to Bowers (value recalled from memory); A, B
- * and U must be calibrated per basin.
+ * Bowers (1995), SPE Drilling & Completion 10(2), 89–95 (SPE 27488): V = V0 + A·σ^B, published with V and V0 in
+ * ft/s and σ in psi, so A is in (ft/s)/psi^B and B is dimensionless. Every velocity and stress these functions take
+ * or return is SI (m/s, Pa), v0Ms and vMaxMs included; only A and B stay in the published units, so calibrations
+ * from the paper and from field studies can be typed in unchanged. The conversion to ft/s and psi happens inside.
+ * The A = 4.4561, B = 0.8168, U = 3.13 in the examples are Gulf of Mexico calibrations attributed to Bowers (value
+ * recalled from memory); A, B and U must be calibrated per basin. See docs/sources.md [bowers1995].
  */
 export interface BowersParams {
-  /** Velocity at zero effective stress (mudline), ft/s. Default 5000 (Bowers 1995). */
-  v0?: number;
-  /** (ft/s)/psi^B. */
+  /** Velocity at zero effective stress (mudline), m/s. Default 1524 m/s (5000 ft/s, Bowers 1995). */
+  v0Ms?: number;
+  /** (ft/s)/psi^B: Bowers' published unit, converted inside. */
   A: number;
+  /** Dimensionless exponent. */
   B: number;
 }
 
 export interface BowersUnloadingParams extends BowersParams {
   /** Velocity where unloading began (the maximum past effective stress), m/s. */
-  vMax: number;
+  vMaxMs: number;
   /** Unloading parameter, >= 1; U = 1 retraces the loading curve, larger U is less reversible. */
   U: number;
 }
 
-/** Bowers' default mudline velocity, ft/s. */
-export const BOWERS_V0_FT_S = 5000;
+/** Bowers' default mudline velocity, 5000 ft/s, in m/s. */
+export const BOWERS_V0_MS = 5000 * FT_M;
 
+/** The parameters in Bowers' units, where the published A and B apply. */
 interface Checked {
-  v0: number;
+  v0Ms: number;
+  v0FtS: number;
   A: number;
   B: number;
 }
 
 function checkParams(fn: string, p: BowersParams): Checked {
+  const v0Ms = param(fn, 'v0Ms', p.v0Ms ?? BOWERS_V0_MS, { min: 0 });
   return {
-    v0: param(fn, 'v0', p.v0 ?? BOWERS_V0_FT_S, { min: 0 }),
+    v0Ms,
+    v0FtS: v0Ms / FT_M,
     A: param(fn, 'A', p.A, { gt: 0 }),
     B: param(fn, 'B', p.B, { gt: 0 }),
   };
@@ -44,15 +49,16 @@ function checkParams(fn: string, p: BowersParams): Checked {
 
 function checkUnloading(fn: string, p: BowersUnloadingParams): Checked & { sigmaMaxPsi: number; vMaxFtS: number; U: number } {
   const c = checkParams(fn, p);
-  const vMaxFtS = param(fn, 'vMax', p.vMax, { gt: 0 }) / FT_M;
-  if (!(vMaxFtS > c.v0)) throw new Error(`${fn}: vMax must exceed v0 (got ${p.vMax} m/s = ${vMaxFtS} ft/s, v0 ${c.v0} ft/s)`);
+  const vMaxMs = param(fn, 'vMaxMs', p.vMaxMs, { gt: 0 });
+  if (!(vMaxMs > c.v0Ms)) throw new Error(`${fn}: vMaxMs must exceed v0Ms (got ${vMaxMs} m/s, v0Ms ${c.v0Ms} m/s)`);
   const U = param(fn, 'U', p.U, { min: 1 });
-  return { ...c, vMaxFtS, U, sigmaMaxPsi: ((vMaxFtS - c.v0) / c.A) ** (1 / c.B) };
+  const vMaxFtS = vMaxMs / FT_M;
+  return { ...c, vMaxFtS, U, sigmaMaxPsi: ((vMaxFtS - c.v0FtS) / c.A) ** (1 / c.B) };
 }
 
 /** Effective stress on the virgin curve for a velocity; zero at or below V0, where the grains carry no load. */
 function virginStressPsi(vFtS: number, c: Checked): number {
-  return vFtS <= c.v0 ? 0 : ((vFtS - c.v0) / c.A) ** (1 / c.B);
+  return vFtS <= c.v0FtS ? 0 : ((vFtS - c.v0FtS) / c.A) ** (1 / c.B);
 }
 
 /**
@@ -66,7 +72,7 @@ export function bowersVelocityLoading<S extends Numeric>(sigmaPa: S, params: Bow
   const n = commonLength(fn, { sigmaPa });
   return mapSamples(n, (i) => {
     const sigmaPsi = sampleAt(fn, 'sigmaPa', sigmaPa, i, 'nonNegative') / PSI_PA;
-    return (c.v0 + c.A * sigmaPsi ** c.B) * FT_M;
+    return (c.v0FtS + c.A * sigmaPsi ** c.B) * FT_M;
   }) as ResultOf<S>;
 }
 
@@ -74,7 +80,7 @@ export function bowersVelocityLoading<S extends Numeric>(sigmaPa: S, params: Bow
  * Velocity on the unloading curve, V = V0 + A·[σmax·(σ/σmax)^(1/U)]^B with σmax = ((Vmax − V0)/A)^(1/B),
  * m/s. At σ >= σmax the rock is back on the virgin curve and the loading velocity is returned.
  * @example
- * bowersVelocityUnloading(10e6, { A: 4.4561, B: 0.8168, vMax: 3000, U: 3.13 });
+ * bowersVelocityUnloading(10e6, { A: 4.4561, B: 0.8168, vMaxMs: 3000, U: 3.13 });
  */
 export function bowersVelocityUnloading<S extends Numeric>(sigmaPa: S, params: BowersUnloadingParams): ResultOf<S> {
   const fn = 'bowersVelocityUnloading';
@@ -83,7 +89,7 @@ export function bowersVelocityUnloading<S extends Numeric>(sigmaPa: S, params: B
   return mapSamples(n, (i) => {
     const sigmaPsi = sampleAt(fn, 'sigmaPa', sigmaPa, i, 'nonNegative') / PSI_PA;
     const onCurve = sigmaPsi >= c.sigmaMaxPsi ? sigmaPsi : c.sigmaMaxPsi * (sigmaPsi / c.sigmaMaxPsi) ** (1 / c.U);
-    return (c.v0 + c.A * onCurve ** c.B) * FT_M;
+    return (c.v0FtS + c.A * onCurve ** c.B) * FT_M;
   }) as ResultOf<S>;
 }
 
@@ -117,9 +123,9 @@ export interface BowersUnloadingInput extends BowersUnloadingParams {
 
 /**
  * Pore pressure from velocity on the unloading curve: σ = σmax·(σ_vc/σmax)^U, where σ_vc is the
- * virgin-curve stress for that velocity; P = S − σ (Pa). Velocities at or above vMax use the loading curve.
+ * virgin-curve stress for that velocity; P = S − σ (Pa). Velocities at or above vMaxMs use the loading curve.
  * @example
- * bowersUnloading({ overburdenPa: 60e6, velocityMs: 2800, A: 4.4561, B: 0.8168, vMax: 3000, U: 3.13 });
+ * bowersUnloading({ overburdenPa: 60e6, velocityMs: 2800, A: 4.4561, B: 0.8168, vMaxMs: 3000, U: 3.13 });
  */
 export function bowersUnloading<I extends BowersUnloadingInput>(input: I): ResultOf<I['overburdenPa'] | I['velocityMs']> {
   const fn = 'bowersUnloading';

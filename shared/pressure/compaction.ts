@@ -7,11 +7,11 @@ export interface DiffusionTimeInput {
   /** Porosity, fraction. */
   porosity: Numeric;
   /** Pore-fluid compressibility β_f, 1/Pa. */
-  fluidCompressibility: Numeric;
+  fluidCompressibilityPerPa: Numeric;
   /** Pore-volume (rock) compressibility β_r, 1/Pa. */
-  rockCompressibility: Numeric;
+  rockCompressibilityPerPa: Numeric;
   /** Fluid viscosity η, Pa.s. */
-  viscosity: Numeric;
+  viscosityPaS: Numeric;
   /** Drainage length L, m. */
   lengthM: Numeric;
   permeabilityM2: Numeric;
@@ -22,18 +22,18 @@ export interface DiffusionTimeInput {
  * storage S_s = φβ_f + β_r and hydraulic diffusivity c_v = k/(η·S_s).
  * @example
  * // 100 m of 10 nD shale: ≈ 1.1e12 s ≈ 35,000 years
- * diffusionTime({ porosity: 0.2, fluidCompressibility: 4.5e-10, rockCompressibility: 1e-9,
- *                 viscosity: 1e-3, lengthM: 100, permeabilityM2: 9.869233e-21 });
+ * diffusionTime({ porosity: 0.2, fluidCompressibilityPerPa: 4.5e-10, rockCompressibilityPerPa: 1e-9,
+ *                 viscosityPaS: 1e-3, lengthM: 100, permeabilityM2: 9.869233e-21 });
  */
 export function diffusionTime<I extends DiffusionTimeInput>(input: I): ResultOf<I[keyof I]> {
   const fn = 'diffusionTime';
-  const { porosity, fluidCompressibility, rockCompressibility, viscosity, lengthM, permeabilityM2 } = input;
-  const n = commonLength(fn, { porosity, fluidCompressibility, rockCompressibility, viscosity, lengthM, permeabilityM2 });
+  const { porosity, fluidCompressibilityPerPa, rockCompressibilityPerPa, viscosityPaS, lengthM, permeabilityM2 } = input;
+  const n = commonLength(fn, { porosity, fluidCompressibilityPerPa, rockCompressibilityPerPa, viscosityPaS, lengthM, permeabilityM2 });
   return mapSamples(n, (i) => {
     const phi = sampleAt(fn, 'porosity', porosity, i, 'fraction');
-    const bf = sampleAt(fn, 'fluidCompressibility', fluidCompressibility, i, 'nonNegative');
-    const br = sampleAt(fn, 'rockCompressibility', rockCompressibility, i, 'nonNegative');
-    const eta = sampleAt(fn, 'viscosity', viscosity, i, 'positive');
+    const bf = sampleAt(fn, 'fluidCompressibilityPerPa', fluidCompressibilityPerPa, i, 'nonNegative');
+    const br = sampleAt(fn, 'rockCompressibilityPerPa', rockCompressibilityPerPa, i, 'nonNegative');
+    const eta = sampleAt(fn, 'viscosityPaS', viscosityPaS, i, 'positive');
     const L = sampleAt(fn, 'lengthM', lengthM, i, 'nonNegative');
     const k = sampleAt(fn, 'permeabilityM2', permeabilityM2, i, 'positive');
     return ((phi * bf + br) * eta * L * L) / k;
@@ -51,20 +51,20 @@ export interface CompactionScreenInput {
   /** Porosity, fraction. */
   porosity: number;
   /** 1/Pa; default 4.5e-10 (water). */
-  fluidCompressibility?: number;
+  fluidCompressibilityPerPa?: number;
   /** 1/Pa; default 1e-9, the soft end of 1e-10 … 1e-9 for young mud. */
-  rockCompressibility?: number;
+  rockCompressibilityPerPa?: number;
   /** Pa.s; default 1e-3 (water). */
-  viscosity?: number;
+  viscosityPaS?: number;
   /** Relative height where the excess ratio is reported, 0 (base, where it is largest) … 1; default 0. */
   zeta?: number;
 }
 
-/** Defaults for `compactionScreen` (typical values as listed in REFERENCES.md; common practice, no source). */
+/** Defaults for `compactionScreen` (typical values, docs/sources.md [diffusion]; common practice, no source). */
 export const COMPACTION_SCREEN_DEFAULTS = {
-  fluidCompressibility: 4.5e-10,
-  rockCompressibility: 1e-9,
-  viscosity: 1e-3,
+  fluidCompressibilityPerPa: 4.5e-10,
+  rockCompressibilityPerPa: 1e-9,
+  viscosityPaS: 1e-3,
   zeta: 0,
 } as const;
 
@@ -102,9 +102,16 @@ export function compactionScreen(input: CompactionScreenInput): CompactionScreen
   const h = param(fn, 'thicknessM', input.thicknessM, { gt: 0 });
   const k = param(fn, 'permeabilityM2', input.permeabilityM2, { gt: 0 });
   const phi = param(fn, 'porosity', input.porosity, { min: 0, max: 1 });
-  const bf = param(fn, 'fluidCompressibility', input.fluidCompressibility ?? COMPACTION_SCREEN_DEFAULTS.fluidCompressibility, { min: 0 });
-  const br = param(fn, 'rockCompressibility', input.rockCompressibility ?? COMPACTION_SCREEN_DEFAULTS.rockCompressibility, { min: 0 });
-  const eta = param(fn, 'viscosity', input.viscosity ?? COMPACTION_SCREEN_DEFAULTS.viscosity, { gt: 0 });
+  const bf = param(
+    fn,
+    'fluidCompressibilityPerPa',
+    input.fluidCompressibilityPerPa ?? COMPACTION_SCREEN_DEFAULTS.fluidCompressibilityPerPa,
+    { min: 0 },
+  );
+  const br = param(fn, 'rockCompressibilityPerPa', input.rockCompressibilityPerPa ?? COMPACTION_SCREEN_DEFAULTS.rockCompressibilityPerPa, {
+    min: 0,
+  });
+  const eta = param(fn, 'viscosityPaS', input.viscosityPaS ?? COMPACTION_SCREEN_DEFAULTS.viscosityPaS, { gt: 0 });
   const zeta = param(fn, 'zeta', input.zeta ?? COMPACTION_SCREEN_DEFAULTS.zeta, { min: 0, max: 1 });
   const storagePerPa = phi * bf + br;
   if (!(storagePerPa > 0)) throw new Error(`${fn}: storage φβf + βr must be > 0 (got ${storagePerPa})`);

@@ -1,4 +1,4 @@
-import { integratePanels } from './gauss-legendre';
+import { integratePanels } from './gaussLegendre';
 import { param } from './inputs';
 
 /**

@@ -1,7 +1,7 @@
 import { compactionDensity, SHALE_COMPACTION } from '../pressure/density';
 import { hydrostatic } from '../pressure/hydrostatic';
 import { overburden, OVERBURDEN_DEFAULTS } from '../pressure/overburden';
-import { topOfOverpressure, type TopOfOverpressure } from '../pressure/top-of-overpressure';
+import { topOfOverpressure, type TopOfOverpressure } from '../pressure/topOfOverpressure';
 import { G, PPG_KGM3 } from '../units/constants';
 import type { NumericArray } from '../units/convert';
 import { isGoodPoreMeasurement, misfit, type Misfit, type ProfileObservation } from './calibration';

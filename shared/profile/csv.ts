@@ -1,6 +1,6 @@
 import { G } from '../units/constants';
 import { convert } from '../units/convert';
-import type { DepthUnit, GradientUnit, PressureUnit } from '../units/unit-table';
+import type { DepthUnit, GradientUnit, PressureUnit } from '../units/unitTable';
 import type { Profile } from './buildProfile';
 
 /** The caution every exported view carries, word for word as on the screen. */

@@ -9,8 +9,9 @@ export type PoreSettings = (
   | { method: 'eaton-resistivity'; exponent: number }
   | {
       method: 'bowers';
-      /** Mudline velocity, ft/s (Bowers' published unit). */
+      /** Mudline velocity, ft/s, as stored and shown beside A (Bowers' published unit); converted to m/s for the method. */
       v0: number;
+      /** (ft/s)/psi^B (Bowers' published unit). */
       A: number;
       B: number;
       unloading: { vMaxMs: number; U: number } | null;
@@ -82,9 +83,9 @@ export function porePressure(settings: PoreSettings, inputs: PoreInputs): Float6
   const { overburdenPa, normalPa, log, trend } = inputs;
   if (settings.method === 'bowers') {
     const velocityMs = log.map(velocityFromSlowness);
-    const common = { overburdenPa, velocityMs, v0: settings.v0, A: settings.A, B: settings.B };
+    const common = { overburdenPa, velocityMs, v0Ms: settings.v0 * FT_M, A: settings.A, B: settings.B };
     return settings.unloading
-      ? bowersUnloading({ ...common, vMax: settings.unloading.vMaxMs, U: settings.unloading.U })
+      ? bowersUnloading({ ...common, vMaxMs: settings.unloading.vMaxMs, U: settings.unloading.U })
       : bowersLoading(common);
   }
   if (!trend) throw new Error(`porePressure: ${settings.method} needs a normal compaction trend`);

@@ -1,4 +1,4 @@
-import { fitNormalTrend, type NormalTrendModel } from '../pressure/normal-trend';
+import { fitNormalTrend, type NormalTrendModel } from '../pressure/normalTrend';
 import type { NumericArray } from '../units/convert';
 
 /** Which log the normal compaction trend is drawn on. */

@@ -1,4 +1,4 @@
-import { UNIT_TABLE, type UnitName } from './unit-table';
+import { UNIT_TABLE, type UnitName } from './unitTable';
 
 /** Plain arrays and typed arrays are both accepted wherever a curve is. */
 export type NumericArray = ArrayLike<number>;

@@ -3,5 +3,5 @@
  * 1/Pa, s); these helpers convert at the edges (import, display, export).
  */
 export * from './constants';
-export * from './unit-table';
+export * from './unitTable';
 export * from './convert';

@@ -39,7 +39,7 @@ describe('pressures and equivalent mud weights', () => {
 
   it('turns an EMW in kg/m³ into ppg, sg, kPa/m and psi/ft', () => {
     // 1 sg = 8.345404 ppg (1 US gal = 231 in³, 1 lb = 0.45359237 kg); 1 sg gradient = 9.80665 kPa/m (standard gravity);
-    // 1 psi/ft = 22.62059 kPa/m, so 1 sg = 0.433527 psi/ft. Values from /work/shared/REFERENCES.md.
+    // 1 psi/ft = 22.62059 kPa/m, so 1 sg = 0.433527 psi/ft. Exact factors: docs/sources.md [units].
     expect(emwIn(1000, 'ppg')).toBeCloseTo(8.345404, 6);
     expect(emwIn(1000, 'sg')).toBeCloseTo(1, 12);
     expect(emwIn(1000, 'kPa/m')).toBeCloseTo(9.80665, 9);

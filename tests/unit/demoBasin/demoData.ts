@@ -16,5 +16,5 @@ export function cleanDemo(): DemoBasin {
 
 /** Standard gravity, m/s² (3rd CGPM, 1901). */
 export const g = 9.80665;
-/** 1 ppg in kg/m3: 1 SG = 8.345404 ppg (REFERENCES.md "Units and hydrostatics"). */
+/** 1 ppg in kg/m3: 1 SG = 8.345404 ppg (docs/sources.md [units]). */
 export const PPG = 1000 / 8.345404;

@@ -55,7 +55,7 @@ describe('demo import fixtures', () => {
     for (const r of records) {
       const md = r.values.md as number; // metres, converted from ft by the importer
       const tvd = (r.values.tvd as number | null) ?? md;
-      // psi → Pa by 6894.757 Pa/psi; EMW = p/(g·TVD) (REFERENCES.md "Units and hydrostatics").
+      // psi → Pa by 6894.757 Pa/psi; EMW = p/(g·TVD) (docs/sources.md [units], [emw]).
       const emwSg = ((r.values.value as number) * 6894.757293168361) / (9.80665 * tvd) / 1000;
       expect(emwSg).toBeGreaterThan(0.5);
       expect(emwSg).toBeLessThan(3.0);

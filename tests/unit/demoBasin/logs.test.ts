@@ -57,7 +57,7 @@ describe('logs against Eaton (1975, SPE 5544)', () => {
   });
 
   it('fitNormalTrend on the shale sonic above the top recovers the normal compaction trend', () => {
-    // Δt_n(z) = Δt_m + (Δt_ml − Δt_m)·exp(−c·z), z below the mudline (REFERENCES.md "Pore pressure from logs").
+    // Δt_n(z) = Δt_m + (Δt_ml − Δt_m)·exp(−c·z), z below the mudline (docs/sources.md [nct]).
     const w = clean.wells.find((x) => x.profile === 'vertical' && x.truth.column.topTvdM - x.truth.column.mudlineTvdM > 2500)!;
     const z = below(w);
     const topBelow = w.truth.column.topTvdM - w.truth.column.mudlineTvdM;

@@ -25,7 +25,7 @@ describe('kicks, losses and mud weights', () => {
   });
 
   it('keeps mud above pore pressure except where the well kicked, mostly by the 0.3–0.5 ppg trip margin', () => {
-    // Trip margin 0.2–0.5 ppg above pore pressure: common practice, no source (REFERENCES.md "Margins").
+    // Trip margin 0.2–0.5 ppg above pore pressure: common practice, no source (docs/sources.md [margins]).
     let below = 0;
     let withMargin = 0;
     let total = 0;
@@ -87,7 +87,7 @@ describe('casing shoes and leak-off tests', () => {
   });
 
   it('keeps the mud under the last shoe test, except in the wells that kicked or lost mud', () => {
-    // The shoe test sets the maximum mud weight of the next hole section (REFERENCES.md "Fracture pressure").
+    // The shoe test sets the maximum mud weight of the next hole section (docs/sources.md [shoe-test]).
     for (const w of basin.wells) {
       if (w.pressures.some((p) => p.kind === 'kick' || p.kind === 'loss')) continue;
       const tests = w.pressures.filter((p) => p.kind === 'lot' || p.kind === 'fit');
@@ -142,7 +142,7 @@ describe('units as entered', () => {
     const units = new Set(all().map(({ p }) => p.unitEntered));
     expect([...units].sort()).toEqual(['MPa', 'bar', 'kPa', 'kg/m3', 'ppg', 'psi', 'sg']);
     // Conversions written out from the handbook factors, not through shared/units:
-    // 1 psi = 6894.757293168361 Pa (lb·g/in²), 1 ppg = 1000/8.345404 kg/m3 (REFERENCES.md).
+    // 1 psi = 6894.757293168361 Pa (lb·g/in²), 1 ppg = 1000/8.345404 kg/m3 (docs/sources.md [units]).
     const toPa: Record<string, number> = { psi: 6894.757293168361, kPa: 1e3, bar: 1e5, MPa: 1e6 };
     const toKgM3: Record<string, number> = { ppg: PPG, sg: 1000, 'kg/m3': 1 };
     for (const { p } of all()) {
@@ -182,7 +182,7 @@ describe('depths: MD and TVD', () => {
 
   it('has survey stations every 30 m that lie on circular arcs in the build sections', () => {
     // A constant-azimuth build at a constant rate is a circle in a vertical plane: between stations
-    // ΔTVD = R·(sin I2 − sin I1) with R = ΔMD/ΔI (REFERENCES.md: a planar arc must match the exact circle).
+    // ΔTVD = R·(sin I2 − sin I1) with R = ΔMD/ΔI (docs/sources.md [min-curvature]: a planar arc must match the exact circle).
     for (const w of basin.wells.filter((x) => x.survey)) {
       const st = w.survey!;
       for (let i = 1; i < st.length; i++) {

@@ -19,7 +19,7 @@ function sedimentIndices(c: DemoBasin['wells'][number]['truth']['column']): numb
 
 describe('pore pressure', () => {
   it('is a brine column from sea level above the top of overpressure (1030 kg/m3 within 1e-9)', () => {
-    // p = ρ·g·h with h from sea level (REFERENCES.md "Units and hydrostatics"); basin brine 1030–1070 kg/m3.
+    // p = ρ·g·h with h from sea level (docs/sources.md [hydrostatic]); basin brine 1030–1070 kg/m3.
     expect(DEMO_PHYSICS.brineKgM3).toBeGreaterThanOrEqual(1030);
     expect(DEMO_PHYSICS.brineKgM3).toBeLessThanOrEqual(1040);
     let worst = 0;

@@ -8,7 +8,7 @@ import {
   type Variogram,
   type VariogramLag,
 } from '@shared/interpolation/index';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 
 function exactLags(v: Variogram, hs: number[]): VariogramLag[] {
   return hs.map((h, i) => ({ lagM: h, gamma: variogramValue(v, h), pairs: 20 + 7 * i }));
@@ -43,7 +43,7 @@ describe('fitVariogram', () => {
     // 300 random sites in 200 m × 200 m, z = L·ε with C = LLᵀ (ml-matrix Cholesky) of the known model;
     // experimental variograms pooled over 12 seeded realisations to tame the sampling noise.
     const truth: Variogram = { model: 'exponential', nugget: 0.5, sill: 4, range: 60 };
-    const random = seededRandom(2024);
+    const random = mulberry32(2024);
     const n = 300;
     const sites = Array.from({ length: n }, () => ({ x: random() * 200, y: random() * 200 }));
     const C = new Matrix(n, n);

@@ -1,7 +1,7 @@
 import { distance, featureCollection, interpolate, point } from '@turf/turf';
 import { describe, expect, it } from 'vitest';
 import { idw } from '@shared/interpolation/index';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 
 /** turf's mean Earth radius (@turf/helpers earthRadius = 6371008.8 m). */
 const EARTH_RADIUS_M = 6371008.8;
@@ -12,7 +12,7 @@ describe('idw against @turf/turf interpolate', () => {
     // turf works in lon/lat with haversine distance; at the equator over ~1 km the planar frame
     // x = R·λ, y = R·φ reproduces its distances to better than 1e-7 (asserted below), so IDW values must
     // agree to 1e-6 of the data range (the weights 1/d² carry twice the relative distance error).
-    const random = seededRandom(17);
+    const random = mulberry32(17);
     const data = Array.from({ length: 25 }, () => ({ lon: random() * 0.009, lat: random() * 0.009, value: 100 + 50 * random() }));
     const pts = featureCollection(data.map((d) => point([d.lon, d.lat], { value: d.value })));
     const result = interpolate(pts, 0.15, { gridType: 'point', property: 'value', units: 'kilometers', weight: 2 });
@@ -66,7 +66,7 @@ describe('idw', () => {
   });
 
   it('with maxNeighbours equals IDW over the k nearest found by brute force', () => {
-    const random = seededRandom(8);
+    const random = mulberry32(8);
     const pts = Array.from({ length: 200 }, () => ({ x: random() * 100, y: random() * 100, value: random() * 10 }));
     const targets = Array.from({ length: 50 }, () => ({ x: random() * 120 - 10, y: random() * 120 - 10 }));
     const ours = idw(pts, targets, { power: 3, maxNeighbours: 7 });

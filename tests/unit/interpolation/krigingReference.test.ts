@@ -6,7 +6,7 @@ import {
   shiftedCovarianceParameters,
   trainWithParameters,
 } from '../../bench/reference/sakitamKriging';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 import { ISAAKS_SRIVASTAVA_POINTS } from './fixtures';
 
 /**
@@ -19,7 +19,7 @@ import { ISAAKS_SRIVASTAVA_POINTS } from './fixtures';
  * so the tolerance is 1e-5 absolute on values of a few hundred (≈ 2e-8 relative).
  */
 describe('ordinaryKriging against @sakitam-gis/kriging', () => {
-  const random = seededRandom(99);
+  const random = mulberry32(99);
   const extra = Array.from({ length: 30 }, () => ({ x: 50 + random() * 40, y: 115 + random() * 40, value: 200 + 600 * random() }));
   const points = [...ISAAKS_SRIVASTAVA_POINTS, ...extra];
   const targets = Array.from({ length: 60 }, () => ({ x: 45 + random() * 50, y: 110 + random() * 50 }));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { leaveOneOut, ordinaryKriging, type Variogram } from '@shared/interpolation/index';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 
 // three data on a line: A (0) = 1, B (1) = 2, C (3) = 4
 const LINE = [
@@ -50,7 +50,7 @@ describe('leaveOneOut', () => {
   });
 
   it('the one-inverse shortcut (Dubrule 1983) equals re-kriging without each datum', () => {
-    const random = seededRandom(31);
+    const random = mulberry32(31);
     const pts = Array.from({ length: 30 }, () => ({ x: random() * 500, y: random() * 500, value: 10 + 5 * random() }));
     const v: Variogram = { model: 'spherical', nugget: 0.3, sill: 2, range: 250 };
     const fast = leaveOneOut(pts, { kind: 'kriging', variogram: v });

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { createNeighbourIndex } from '@shared/interpolation/index';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 
 describe('createNeighbourIndex (kNN on kdbush)', () => {
   it('finds the same k nearest as a brute-force sort, nearest first, with and without an excluded point', () => {
-    const random = seededRandom(5);
+    const random = mulberry32(5);
     const n = 3000;
     const xs = Float64Array.from({ length: n }, () => random() * 1000);
     const ys = Float64Array.from({ length: n }, () => random() * 1000);

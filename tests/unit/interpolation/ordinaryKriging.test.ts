@@ -1,7 +1,7 @@
 import { Matrix, solve } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { covariance, ordinaryKriging, type DataPoint, type Target, type Variogram } from '@shared/interpolation/index';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 import { ISAAKS_SRIVASTAVA_POINTS, ISAAKS_SRIVASTAVA_TARGET, ISAAKS_SRIVASTAVA_VARIOGRAM } from './fixtures';
 
 /**
@@ -32,7 +32,7 @@ function mlMatrixKriging(
 }
 
 function randomPoints(n: number, seed: number, size = 1000): DataPoint[] {
-  const random = seededRandom(seed);
+  const random = mulberry32(seed);
   return Array.from({ length: n }, () => {
     const x = random() * size;
     const y = random() * size;

@@ -9,7 +9,7 @@ describe('gardnerDensity', () => {
   });
 
   it('with the rounded metric coefficient 0.31 stays within 0.2 % of the published form', () => {
-    // REFERENCES.md quotes 0.31·V[m/s]^0.25; 0.31 × 3048^0.25 = 2.3034 g/cc.
+    // Gardner et al. 1974 in m/s, rounded (docs/sources.md [gardner1974]): 0.31·V[m/s]^0.25; 0.31 × 3048^0.25 = 2.3034 g/cc.
     const rho = gardnerDensity(3048, { a: 0.31 });
     expect(rho / 1000).toBeCloseTo(2.3034, 4);
     expect(Math.abs(rho / 2300 - 1)).toBeLessThan(0.002);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { gibsonExcessProfile, gibsonExcessRatio } from '@shared/pressure';
-import { gibsonByFiniteDifference } from './gibson-finite-difference';
+import { gibsonByFiniteDifference } from './gibsonFiniteDifference';
 
 describe('gibsonExcessRatio', () => {
   it('agrees with a finite-difference solution of the moving-boundary problem to 1e-3', () => {

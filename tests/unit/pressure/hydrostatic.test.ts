@@ -7,7 +7,7 @@ const psi = (v: number) => convert(v, 'psi', 'Pa');
 
 describe('hydrostatic', () => {
   it('matches the oilfield formula p[psi] = 0.051948 · MW[ppg] · TVD[ft]', () => {
-    // REFERENCES.md "Units and hydrostatics": 10 ppg at 10,000 ft → 0.051948 × 10 × 10,000 = 5194.8 psi.
+    // docs/sources.md [emw]: 10 ppg at 10,000 ft → 0.051948 × 10 × 10,000 = 5194.8 psi.
     const p = hydrostatic(ft(10_000), ppg(10));
     expect(convert(p, 'Pa', 'psi')).toBeCloseTo((12 / 231) * 10 * 10_000, 6);
     expect(convert(p, 'Pa', 'psi')).toBeCloseTo(5194.8, 1);
@@ -41,7 +41,7 @@ describe('hydrostatic', () => {
 
 describe('emw', () => {
   it('inverts the oilfield formula', () => {
-    // REFERENCES.md: EMW = p / (0.051948 × TVD): 5194.8 psi at 10,000 ft → 10.000 ppg.
+    // docs/sources.md [emw]: EMW = p / (0.051948 × TVD): 5194.8 psi at 10,000 ft → 10.000 ppg.
     const rho = emw(psi(5194.8), ft(10_000));
     expect(convert(rho, 'kg/m3', 'ppg')).toBeCloseTo(5194.8 / ((12 / 231) * 10_000), 9);
     expect(convert(rho, 'kg/m3', 'ppg')).toBeCloseTo(10, 3);

@@ -5,7 +5,7 @@ const g = 9.80665; // standard gravity (3rd CGPM, 1901)
 
 describe('overburden', () => {
   it('offshore: air gap adds nothing, seawater to the mudline, then constant sediment (analytic)', () => {
-    // S_v = g ∫ ρ dz (REFERENCES.md "Overburden and compaction"): 25 m air, 1000 m of 1025 kg/m3 water,
+    // S_v = g ∫ ρ dz (docs/sources.md [overburden]): 25 m air, 1000 m of 1025 kg/m3 water,
     // then 2000 kg/m3: S(z) = 1025·g·1000 + 2000·g·(z − 1025) below the mudline at 1025 m.
     const depthM = [0, 25, 525, 1025, 1525, 3025];
     const s = overburden({ depthM, densityKgM3: 2000, waterDepthM: 1000, airGapM: 25 });
@@ -38,7 +38,7 @@ describe('overburden', () => {
   });
 
   it('reproduces the 1.0 psi/ft rule of thumb for 2.31 g/cc', () => {
-    // REFERENCES.md: rule of thumb 1.0 psi/ft ≈ 2.31 g/cc (common practice).
+    // Rule of thumb 1.0 psi/ft ≈ 2.31 g/cc (common practice, no source; docs/sources.md [overburden]).
     const s = overburden({ depthM: [0, 3048], densityKgM3: 2310 });
     expect(convert(s[1], 'Pa', 'psi') / 10_000).toBeCloseTo(1.0, 2);
   });

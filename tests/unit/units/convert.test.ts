@@ -28,7 +28,7 @@ describe('exact constants', () => {
     // 1 psi = 1 lbf/in² = 0.45359237 kg × 9.80665 m/s² / (0.0254 m)² = 6894.757293168 Pa (same agreement).
     expectRel(PSI_PA, 6894.757293168, 1e-12);
     expectRel(convert(1, 'psi', 'Pa'), (0.45359237 * 9.80665) / 0.0254 ** 2, 1e-15);
-    // Oilfield constant 0.051948 = 12/231 exactly (1 US gal = 231 in³), REFERENCES.md "Units and hydrostatics".
+    // Oilfield constant 0.051948 = 12/231 exactly (1 US gal = 231 in³), docs/sources.md [units].
     expect(PSI_PER_FT_PER_PPG).toBe(12 / 231);
   });
 });
@@ -42,26 +42,26 @@ describe('convert against handbook values', () => {
   });
 
   it('gradient and equivalent mud weight', () => {
-    // REFERENCES.md: 1 ppg as EMW = 0.051948 psi/ft (12/231 exact).
+    // docs/sources.md [units]: 1 ppg as EMW = 0.051948 psi/ft (12/231 exact).
     expectRel(convert(1, 'ppg', 'psi/ft'), 12 / 231, 1e-14);
     expect(convert(1, 'ppg', 'psi/ft')).toBeCloseTo(0.051948, 6);
-    // REFERENCES.md: 1 psi/ft = 22.62059 kPa/m.
+    // docs/sources.md [units]: 1 psi/ft = 22.62059 kPa/m.
     expect(convert(1, 'psi/ft', 'kPa/m')).toBeCloseTo(22.62059, 5);
-    // REFERENCES.md: 1 ppg = 1.175096 kPa/m.
+    // docs/sources.md [units]: 1 ppg = 1.175096 kPa/m.
     expect(convert(1, 'ppg', 'kPa/m')).toBeCloseTo(1.175096, 6);
-    // REFERENCES.md: 1 MPa/km = 1 kPa/m.
+    // docs/sources.md [units]: 1 MPa/km = 1 kPa/m.
     expect(convert(1, 'MPa/km', 'kPa/m')).toBe(1);
     // 1 g/cc column: ρg = 1000 × 9.80665 Pa/m (definition of the gradient of a fluid column).
     expectRel(convert(1, 'g/cc', 'Pa/m'), 9806.65, 1e-15);
     expectRel(convert(1, 'sg', 'kPa/m'), 9.80665, 1e-15);
-    // REFERENCES.md normal gradients: fresh water 0.433 psi/ft ≈ 9.79 kPa/m; brine 0.465 psi/ft ≈ 10.5 kPa/m ≈ 8.95 ppg.
+    // Normal gradients, common practice (docs/sources.md [hydrostatic]): fresh water 0.433 psi/ft ≈ 9.79 kPa/m; brine 0.465 psi/ft ≈ 10.5 kPa/m ≈ 8.95 ppg.
     expect(convert(0.433, 'psi/ft', 'kPa/m')).toBeCloseTo(9.79, 2);
     expect(convert(0.465, 'psi/ft', 'kPa/m')).toBeCloseTo(10.5, 1);
     expect(convert(0.465, 'psi/ft', 'ppg')).toBeCloseTo(8.95, 2);
   });
 
   it('density', () => {
-    // REFERENCES.md: 1 SG = 8.345404 ppg.
+    // docs/sources.md [units]: 1 SG = 8.345404 ppg.
     expect(convert(1, 'sg', 'ppg')).toBeCloseTo(8.345404, 6);
     // NIST SP 811 (2008) App. B: 1 lb/gal (US) = 119.8264 kg/m³ (value recalled from memory); here from lb and 231 in³.
     expect(convert(1, 'ppg', 'kg/m3')).toBeCloseTo(119.8264, 4);
@@ -71,7 +71,7 @@ describe('convert against handbook values', () => {
   });
 
   it('permeability, viscosity, compressibility', () => {
-    // 1 D = 9.869233e-13 m² (conventional SI value of the darcy), REFERENCES.md: 1 mD = 9.869e-16 m².
+    // 1 D = 9.869233e-13 m² (conventional SI value of the darcy), docs/sources.md [units]: 1 mD = 9.869e-16 m².
     expect(convert(1, 'D', 'm2')).toBe(9.869233e-13);
     expectRel(convert(1, 'mD', 'm2'), 9.869233e-16, 1e-15);
     expectRel(convert(10, 'nD', 'm2'), 9.869233e-21, 1e-15); // 1 nD = 1e-9 D

@@ -1,28 +1,10 @@
 /**
- * Seeded randomness for the demo basin. Own code because no seeded generator is among the project's
- * dependencies and Math.random cannot be seeded: mulberry32 (a public-domain 32-bit generator) is
- * tiny, fast and gives the same stream on every JavaScript engine, which keeps the output byte-identical.
+ * Seeded randomness for the demo basin, on the shared mulberry32 stream, which keeps the output byte-identical
+ * on every run and engine.
  */
+import { mulberry32, type Uniform } from '../../../../shared/random/mulberry32';
 
-/** A stream of uniform numbers in [0, 1). */
-export type Uniform = () => number;
-
-/**
- * mulberry32: a 32-bit state, one multiply-xorshift round per draw.
- * @example
- * const next = mulberry32(2026);
- * next(); // a number in [0, 1), the same on every run
- */
-export function mulberry32(seed: number): Uniform {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export type { Uniform };
 
 /**
  * A 32-bit seed from a base seed and labels (FNV-1a over the text), so each well and each purpose

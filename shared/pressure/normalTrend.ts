@@ -221,7 +221,7 @@ function fitExponential(zs: number[], ys: number[], fixedMatrix: number | undefi
 /**
  * Fits a normal compaction trend to the samples between `fromM` and `toM` (NaN samples skipped).
  * - exponential: Δt_n(z) = Δt_m + (Δt_0 − Δt_m)·exp(−c·z), for sonic slowness; pass depth below the
- *   mudline so Δt_0 is the mudline slowness (normal-trend form as in REFERENCES.md).
+ *   mudline so Δt_0 is the mudline slowness (docs/sources.md [nct]).
  * - loglinear: log10(R_n) = a + b·z, for resistivity (Hottmann & Johnson 1965, JPT 17, 717).
  * @example
  * const trend = fitNormalTrend(depthM, dtUsFt, { model: 'exponential', fromM: 500, toM: 2500 });

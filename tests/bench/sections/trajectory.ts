@@ -3,7 +3,7 @@
  * (Sawaryn & Thorogood 2005, SPE Drill. & Compl. 20(1)) written inline here as the reference.
  */
 import { computeSurvey, minimumCurvature, tvdAt, type StationInput } from '../../../shared/trajectory/index';
-import { seededRandom } from '../helpers/random';
+import { mulberry32 } from '../../../shared/random/mulberry32';
 import { timeMedian } from '../helpers/timing';
 import type { BenchSection, Row } from '../helpers/types';
 
@@ -13,7 +13,7 @@ const DEG = Math.PI / 180;
 
 /** A 10 km S-shaped well surveyed every 0.5 m, with small measurement noise. */
 function stations(): StationInput[] {
-  const random = seededRandom(11);
+  const random = mulberry32(11);
   const out: StationInput[] = [];
   for (let i = 0; i < STATIONS; i++) {
     const mdM = i * 0.5;
@@ -65,7 +65,7 @@ export const section: BenchSection = {
     const sorted = new Float64Array(LOOKUPS);
     for (let i = 0; i < LOOKUPS; i++) sorted[i] = (i * lastMd) / LOOKUPS;
     const shuffled = sorted.slice();
-    const random = seededRandom(5);
+    const random = mulberry32(5);
     for (let i = shuffled.length - 1; i > 0; i--) {
       const j = Math.floor(random() * (i + 1));
       [shuffled[i], shuffled[j]] = [shuffled[j], shuffled[i]];

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { topOfOverpressure } from '@shared/pressure';
 
-// Synthetic profile, 10 m sampling from 0 to 4000 m: hydrostatic 10,500 Pa/m (0.465 psi/ft, REFERENCES.md)
+// Synthetic profile, 10 m sampling from 0 to 4000 m: hydrostatic 10,500 Pa/m (0.465 psi/ft, docs/sources.md [hydrostatic])
 // down to 2500 m, then a ramp of +3000 Pa/m of extra pressure below it (a true top at 2500 m).
 const normal = 10_500;
-const margin = 470; // ≈ 0.4 ppg, inside the 0.3–0.5 ppg of common practice (REFERENCES.md)
+const margin = 470; // ≈ 0.4 ppg, inside the 0.3–0.5 ppg of common practice, no source (docs/sources.md [margins])
 const tvdM = Array.from({ length: 401 }, (_, i) => i * 10);
 function profile(): number[] {
   return tvdM.map((z) => normal * z + (z > 2500 ? 3000 * (z - 2500) : 0));

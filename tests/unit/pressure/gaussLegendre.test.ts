@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { integratePanels } from '@shared/pressure/gauss-legendre';
+import { integratePanels } from '@shared/pressure/gaussLegendre';
 
 describe('integratePanels (10-point Gauss–Legendre)', () => {
   it('is exact for polynomials up to degree 19 on one panel', () => {
