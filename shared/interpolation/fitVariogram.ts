@@ -5,6 +5,14 @@ export interface FitVariogramOptions {
   model: VariogramModel;
   /** Fixed nugget; when omitted it is fitted (≥ 0). */
   nugget?: number;
+  /**
+   * 'experimental' (default): one pass with weights N/γ̂²; 'model': Cressie's weights N/γ² from the fitted model,
+   * iterated, with sparse bins merged. On stationary fields 'model' gives σ that matches the errors (the unit tests
+   * on simulated fields); on a field that keeps rising past the largest lag it follows the distant bins and σ near
+   * the wells comes out several times the errors, so the surfaces keep 'experimental' until a model without a sill
+   * is available.
+   */
+  weighting?: 'experimental' | 'model';
 }
 
 const GRID_STEPS = 80;
@@ -146,10 +154,10 @@ export interface VariogramFit {
  * Fits a variogram model to an experimental variogram by iteratively reweighted least squares with Cressie's weights
  * N(h)/γ(h)², pair count over the squared model semivariance (Cressie 1985, "Fitting variogram models by weighted
  * least squares", Mathematical Geology 17(5), 563–586 — volume and pages from memory). The weights start from the
- * experimental γ̂ and are then recomputed from the last fit until they settle: the fixed point solves Cressie's
+ * experimental γ̂; with `weighting: 'model'` they are then recomputed from the last fit until they settle: the fixed point solves Cressie's
  * estimating equation Σ N·(γ̂ − γ)·∂γ/γ² = 0 without the upward pull of minimising his criterion with γ free in the
  * denominator, and — unlike weights from γ̂ alone — a distant bin whose γ̂ the model misses keeps its weight, so
- * the sill follows the large lags. Bins with fewer than MIN_PAIRS_PER_BIN pairs are merged with their neighbour.
+ * the sill follows the large lags; bins with fewer than MIN_PAIRS_PER_BIN pairs are then merged with their neighbour.
  * The practical range is bounded by the largest lag given (choose lags up to about half the largest separation);
  * `rangeAtBound` says when the fit ends on a bound. GSLIB convention: `range` is the practical range, `sill` the
  * partial sill. Own fitter because no maintained npm package fits these models: the range is searched on a log grid
@@ -167,7 +175,9 @@ export function fitVariogramDetailed(experimental: readonly VariogramLag[], opti
     throw new Error(`nugget must be a finite number ≥ 0, got ${String(fixedNugget)}`);
   }
   const minimum = fixedNugget === undefined ? 3 : 2;
-  const bins = mergeSparse(validateBins(experimental, minimum), MIN_PAIRS_PER_BIN, minimum);
+  const iterate = options.weighting === 'model';
+  const validated = validateBins(experimental, minimum);
+  const bins = iterate ? mergeSparse(validated, MIN_PAIRS_PER_BIN, minimum) : validated;
   let maxGamma = 0;
   let hMin = Infinity;
   let hMax = 0;
@@ -178,7 +188,7 @@ export function fitVariogramDetailed(experimental: readonly VariogramLag[], opti
   }
   if (maxGamma === 0) throw new Error('fitVariogram: every semivariance is zero, so there is nothing to fit');
   // keeps Cressie weights finite where a model (or a bin) is zero
-  const floor = (maxGamma * 1e-6) ** 2;
+  const floor = (maxGamma * (iterate ? 1e-6 : 1e-9)) ** 2;
   const lo = Math.log(hMin / 4);
   // Bounded by the largest lag used: past it the data say nothing about the range, and a longer range only
   // stretches the model's slope at short lags (common practice, no source).
@@ -188,7 +198,7 @@ export function fitVariogramDetailed(experimental: readonly VariogramLag[], opti
   let weights = weightsOf(bins.pairs, bins.gamma, floor);
   let best = fitWithWeights(bins, weights, model, fixedNugget, lo, hi);
   let iterations = 0;
-  while (iterations < MAX_REWEIGHTS) {
+  while (iterate && iterations < MAX_REWEIGHTS) {
     iterations++;
     const modelGamma = bins.h.map((h) => best.nugget + best.sill * modelShape(model, h, Math.exp(best.logRange)));
     weights = weightsOf(bins.pairs, modelGamma, floor);

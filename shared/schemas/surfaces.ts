@@ -120,6 +120,19 @@ export function contourIntervalOf(b: z.output<typeof surfaceRequestBody>): numbe
   return b.contourIntervalM;
 }
 
+/**
+ * Leave-one-out errors over their kriging σ: about 68 % within 1σ and 95 % within 2σ, RMS ≈ 1, when σ is right
+ * (normal-distribution table). The verdict bands are common practice, no source.
+ */
+export const SIGMA_VERDICTS = ['about right', 'too small', 'too large'] as const;
+export const sigmaCheckSchema = z.object({
+  rmsZ: z.number(),
+  within1: z.number(),
+  within2: z.number(),
+  verdict: z.enum(SIGMA_VERDICTS),
+});
+export type SigmaCheck = z.infer<typeof sigmaCheckSchema>;
+
 export const surfaceWellSchema = z.object({
   wellId: z.string().uuid(),
   name: z.string(),
@@ -131,6 +144,8 @@ export const surfaceWellSchema = z.object({
   /** Leave-one-out: predicted − observed, in the surface's `unit`. */
   residual: z.number().nullable(),
   predicted: z.number().nullable(),
+  /** Kriging's own standard deviation of that leave-one-out prediction, in `unit` (null for IDW and older runs). */
+  looStdDev: z.number().nullable().default(null),
   /** For quantities at a depth: what the well's profile gives there (TVD below its rig datum, pressures in Pa). */
   atDepth: z
     .object({
@@ -200,7 +215,12 @@ export const surfaceSchema = surfaceSummarySchema.extend({
       fitted: z.boolean(),
     })
     .nullable(),
-  crossValidation: z.object({ rmse: z.number(), meanError: z.number() }),
+  crossValidation: z.object({
+    rmse: z.number(),
+    meanError: z.number(),
+    /** Whether kriging's σ matches its own leave-one-out errors (kriging runs; null for IDW and older runs). */
+    sigmaCheck: sigmaCheckSchema.nullable().default(null),
+  }),
   wells: z.array(surfaceWellSchema),
   /** Wells of the chosen set left out of the run, each with its reason (runs stored before this list: empty). */
   excluded: z.array(surfaceExcludedWellSchema),

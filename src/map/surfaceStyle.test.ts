@@ -114,6 +114,7 @@ describe('surfaceStyle', () => {
         interpretationVersion: 1,
         residual: 12,
         predicted: 2412,
+        looStdDev: 30,
       },
     ]),
     planned: plannedFeatures([{ name: 'AV-9 (planned)', location: { type: 'Point', coordinates: [0.4, 0.6] } }]),

@@ -11,6 +11,7 @@ const well = (name: string, value: number, predicted: number | null): Surface['w
   interpretationVersion: 1,
   residual: predicted === null ? null : predicted - value,
   predicted,
+  looStdDev: null,
 });
 
 describe('crossValidationPoints', () => {

@@ -1,5 +1,6 @@
 import { contourIntervalOf, surfaceSiUnit, type Surface } from '../../schemas/surfaces';
 import type { LeaveOneOutResult } from '../leaveOneOut';
+import { sigmaCheck } from './sigmaCheck';
 import type { DataPoint } from '../types';
 import { contourBands, contourLevels } from './contourBands';
 import { crossValidate } from './crossValidate';
@@ -60,6 +61,7 @@ function wellsOf(
         ...(p.atDepth ? { atDepth: p.atDepth } : {}),
         residual: at(byIndex.get(index)?.residual),
         predicted: at(byIndex.get(index)?.predicted),
+        looStdDev: at(byIndex.get(index)?.stdDev),
       })),
   );
 }
@@ -102,7 +104,11 @@ export function computeSurface({ points: raw, outline, params }: SurfaceInput, p
           fitted: v.fitted,
         }
       : null,
-    crossValidation: { rmse: loo.rmse * scale, meanError: loo.meanError * scale },
+    crossValidation: {
+      rmse: loo.rmse * scale,
+      meanError: loo.meanError * scale,
+      sigmaCheck: cells.flat ? null : sigmaCheck(loo.residuals),
+    },
     wells: wellsOf(raw, merged, loo, scale),
     warnings: [...mergeWarnings, ...cells.warnings, ...levels.warnings],
   };

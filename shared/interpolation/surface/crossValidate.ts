@@ -11,8 +11,8 @@ function looNeighbours(maxNeighbours: number | null, wells: number): number | un
 }
 
 /**
- * Leave-one-out cross-validation of the run, in the solved unit, on the wells' own values: with a trend removed
- * the residuals are cross-validated (the plane fitted on all wells) and the plane goes back on each prediction.
+ * Leave-one-out cross-validation of the run, in the solved unit, on the wells' own values. With a planar trend the
+ * run is universal kriging, so each fold re-estimates the plane without the well it leaves out.
  * @example crossValidate(data, cells, params.method).rmse
  */
 export function crossValidate(data: readonly DataPoint[], cells: CellEstimates, method: SurfaceParams['method']): LeaveOneOutResult {
@@ -20,17 +20,12 @@ export function crossValidate(data: readonly DataPoint[], cells: CellEstimates, 
     return { rmse: 0, meanError: 0, residuals: data.map((d, index) => ({ index, observed: d.value, predicted: d.value, residual: 0 })) };
   const loo: LeaveOneOutMethod =
     method.kind === 'kriging' && cells.variogram
-      ? { kind: 'kriging', variogram: cells.variogram.variogram, maxNeighbours: looNeighbours(method.maxNeighbours, data.length) }
+      ? {
+          kind: 'kriging',
+          variogram: cells.variogram.variogram,
+          maxNeighbours: looNeighbours(method.maxNeighbours, data.length),
+          drift: cells.trend ? 'linear' : 'constant',
+        }
       : { kind: 'idw', power: method.kind === 'idw' ? method.power : 2 };
-  const raw = leaveOneOut(cells.krigData, loo);
-  const plane = cells.trend;
-  if (!plane) return raw;
-  return {
-    ...raw,
-    residuals: raw.residuals.map((r) => ({
-      ...r,
-      observed: data[r.index].value,
-      predicted: r.predicted + plane.evaluate(data[r.index].x, data[r.index].y),
-    })),
-  };
+  return leaveOneOut(data, loo);
 }

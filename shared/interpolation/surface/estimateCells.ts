@@ -1,6 +1,6 @@
 import { krigingNeighbours } from '../../schemas/surfaces';
 import { idw } from '../idw';
-import { ordinaryKriging } from '../ordinaryKriging';
+import { ordinaryKriging, universalKriging } from '../ordinaryKriging';
 import type { PlanarTrend } from '../planarTrend';
 import type { DataPoint, Target } from '../types';
 import { krigingVariogram, type KrigingVariogram } from './krigingVariogram';
@@ -25,9 +25,9 @@ export interface CellEstimates {
   estimates: CellEstimate[];
   /** Kriging only; in the solved unit. */
   variogram: KrigingVariogram | null;
-  /** The plane removed before kriging, when asked for. */
+  /** The least-squares plane whose residuals gave the variogram, when a planar trend was asked for. */
   trend: PlanarTrend | null;
-  /** The values kriged or weighted: the data, or their residuals from the trend. */
+  /** The values the variogram was fitted to: the data, or their residuals from the plane. */
   krigData: DataPoint[];
   /** True when every well has the same value: the surface is that value everywhere. */
   flat: boolean;
@@ -36,8 +36,9 @@ export interface CellEstimates {
 
 /**
  * The value (and, kriging, the variance) at every target from the wells' `data`, which are in the solved unit:
- * the quantity's SI unit divided by `scale`. Ordinary kriging (optionally of the residuals of a planar trend) or
- * inverse-distance weighting, as `method` says.
+ * the quantity's SI unit divided by `scale`. Ordinary kriging, universal kriging with a planar drift (its variogram
+ * fitted to the residuals of a least-squares plane; its variance includes the plane's own error), or inverse-distance
+ * weighting, as `method` says.
  * @example estimateCells(data, targets, { kind: 'idw', power: 2 }, { scale: 1, unit: 'm' }).estimates.length === targets.length
  */
 export function estimateCells(
@@ -73,14 +74,15 @@ export function estimateCells(
   const variogram = krigingVariogram(krigData, data, method, scale);
   // All wells up to ALL_WELLS_MAX: one factorisation for every cell and no seams where a neighbour set changes.
   const maxNeighbours = krigingNeighbours(method.maxNeighbours, data.length);
+  const krige = trend
+    ? (chunk: Target[]) =>
+        universalKriging(data, variogram.variogram, chunk, { maxNeighbours: maxNeighbours && Math.max(4, maxNeighbours) })
+    : (chunk: Target[]) => ordinaryKriging(data, variogram.variogram, chunk, { maxNeighbours });
   const estimates = inChunks(
     targets,
-    (chunk) =>
-      ordinaryKriging(krigData, variogram.variogram, chunk, { maxNeighbours }).map((e, k) => ({
-        value: (e.value + (trend ? trend.evaluate(chunk[k].x, chunk[k].y) : 0)) * scale,
-        variance: e.variance * scale ** 2,
-      })),
+    (chunk) => krige(chunk).map((e) => ({ value: e.value * scale, variance: e.variance * scale ** 2 })),
     progress,
   );
-  return { estimates, variogram, trend, krigData, flat: false, warnings: detrended ? [detrended.warning] : [] };
+  const warnings = [...(detrended ? [detrended.warning] : []), ...variogram.warnings];
+  return { estimates, variogram, trend, krigData, flat: false, warnings };
 }

@@ -1,5 +1,5 @@
 import { experimentalVariogram } from '../experimentalVariogram';
-import { fitVariogram } from '../fitVariogram';
+import { fitVariogramDetailed } from '../fitVariogram';
 import type { DataPoint, Variogram, VariogramLag } from '../types';
 import { SurfaceInputError } from './types';
 
@@ -10,6 +10,8 @@ export interface KrigingVariogram {
   variogram: Variogram;
   experimental: VariogramLag[];
   fitted: boolean;
+  /** What the fit says about itself (a range on a bound). */
+  warnings: string[];
 }
 
 /**
@@ -32,9 +34,26 @@ export function krigingVariogram(
   const experimental = experimentalVariogram(krigData, { lags: EXPERIMENTAL_LAGS, lagWidth: maxD / 2 / EXPERIMENTAL_LAGS });
   if (method.variogram) {
     const v = method.variogram;
-    return { variogram: { ...v, nugget: v.nugget / scale ** 2, sill: v.sill / scale ** 2 }, experimental, fitted: false };
+    return { variogram: { ...v, nugget: v.nugget / scale ** 2, sill: v.sill / scale ** 2 }, experimental, fitted: false, warnings: [] };
   }
   if (experimental.length < 3)
     throw new SurfaceInputError('Too few well pairs to fit a variogram: give one by hand, or use inverse-distance weighting.');
-  return { variogram: fitVariogram(experimental, { model: method.model }), experimental, fitted: true };
+  const fit = fitVariogramDetailed(experimental, { model: method.model });
+  const km = Number((fit.variogram.range / 1000).toPrecision(3));
+  const warnings =
+    fit.rangeAtBound === 'upper'
+      ? [
+          `The fitted range reached the largest lag (${km} km): the semivariance still rises there, the mark of a regional trend${detrendedNote(krigData, locations)}. Far from wells σ may be too small.`,
+        ]
+      : fit.rangeAtBound === 'lower'
+        ? [
+            `The fitted range fell to the shortest lag (${km} km): in effect no correlation at this well spacing, so the surface is close to the wells' mean away from each well.`,
+          ]
+        : [];
+  return { variogram: fit.variogram, experimental, fitted: true, warnings };
+}
+
+/** A hint to remove a planar trend, unless the values kriged are already residuals. */
+function detrendedNote(krigData: readonly DataPoint[], locations: readonly DataPoint[]): string {
+  return krigData === locations ? '; removing a planar trend may help' : ' even after the plane was removed';
 }

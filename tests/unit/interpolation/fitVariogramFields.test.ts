@@ -10,7 +10,7 @@ import {
   type DataPoint,
   type Variogram,
 } from '@shared/interpolation/index';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 
 // Gaussian random fields with a known variogram, simulated by z = L·ε with C = LLᵀ (ml-matrix Cholesky) and ε from
 // Box & Muller (1958). If the fitted variogram is right, leave-one-out errors divided by their kriging σ are standard
@@ -21,7 +21,7 @@ const SITES = 120;
 const LAGS = 12;
 
 function simulate(seed: number, trendPerM = 0): DataPoint[] {
-  const random = seededRandom(seed);
+  const random = mulberry32(seed);
   const sites = Array.from({ length: SITES }, () => ({ x: random() * SIDE_M, y: random() * SIDE_M }));
   const C = new Matrix(SITES, SITES);
   for (let i = 0; i < SITES; i++)
@@ -57,7 +57,7 @@ describe('fitVariogramDetailed on simulated fields with a known variogram', () =
     const totals: number[] = [];
     for (const seed of SEEDS) {
       const points = simulate(seed);
-      const fit = fitVariogramDetailed(lagsOf(points), { model: 'exponential' });
+      const fit = fitVariogramDetailed(lagsOf(points), { model: 'exponential', weighting: 'model' });
       totals.push((fit.variogram.nugget + fit.variogram.sill) / (TRUTH.nugget + TRUTH.sill));
       for (const r of leaveOneOut(points, { kind: 'kriging', variogram: fit.variogram }).residuals) zScores.push(r.residual / r.stdDev!);
     }
@@ -81,11 +81,11 @@ describe('fitVariogramDetailed on simulated fields with a known variogram', () =
     let upper = 0;
     for (const seed of SEEDS) {
       const points = simulate(seed, 0.1);
-      if (fitVariogramDetailed(lagsOf(points), { model: 'exponential' }).rangeAtBound === 'upper') upper++;
+      if (fitVariogramDetailed(lagsOf(points), { model: 'exponential', weighting: 'model' }).rangeAtBound === 'upper') upper++;
       const plane = fitPlanarTrend(points);
       const residuals = points.map((p) => ({ ...p, value: p.value - plane.evaluate(p.x, p.y) }));
       // the variogram of the least-squares residuals, then universal kriging of the data, whose folds re-estimate the plane
-      const fit = fitVariogramDetailed(lagsOf(residuals), { model: 'exponential' });
+      const fit = fitVariogramDetailed(lagsOf(residuals), { model: 'exponential', weighting: 'model' });
       for (const r of leaveOneOut(points, { kind: 'kriging', variogram: fit.variogram, drift: 'linear' }).residuals)
         zScores.push(r.residual / r.stdDev!);
     }
@@ -102,7 +102,7 @@ describe('fitVariogramDetailed on simulated fields with a known variogram', () =
     const hs = [400, 800, 1_200, 1_600, 2_000, 2_400, 2_800, 3_200];
     const gammas = [1_000, 3_000, 8_000, 30_000, 80_000, 200_000, 300_000, 550_000];
     const lags = hs.map((lagM, i) => ({ lagM, gamma: gammas[i], pairs: 12 + 3 * i }));
-    const fit = fitVariogramDetailed(lags, { model: 'spherical' });
+    const fit = fitVariogramDetailed(lags, { model: 'spherical', weighting: 'model' });
     expect(variogramValue(fit.variogram, 3_200)).toBeGreaterThan(0.3 * 550_000);
     expect(fit.rangeAtBound).toBe('upper');
   });
@@ -116,7 +116,7 @@ describe('fitVariogramDetailed on simulated fields with a known variogram', () =
       { lagM: 500, gamma: 52, pairs: 10 },
       { lagM: 600, gamma: 5, pairs: 1 },
     ];
-    const fit = fitVariogramDetailed(lags, { model: 'spherical' });
+    const fit = fitVariogramDetailed(lags, { model: 'spherical', weighting: 'model' });
     // first three pool to 13 pairs at h = (100 + 400 + 3000)/13, γ = (10 + 60 + 400)/13; the last joins the bin before it
     expect(fit.bins.map((b) => b.pairs)).toEqual([13, 10, 11]);
     expect(fit.bins[0].lagM).toBeCloseTo(3500 / 13, 9);

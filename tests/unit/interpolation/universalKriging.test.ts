@@ -1,12 +1,12 @@
 import { Matrix, solve } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
 import { covariance, leaveOneOut, ordinaryKriging, universalKriging, type Variogram } from '@shared/interpolation/index';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 
 const V: Variogram = { model: 'exponential', nugget: 5, sill: 100, range: 3_000 };
 
 function scatter(seed: number, n: number) {
-  const random = seededRandom(seed);
+  const random = mulberry32(seed);
   return Array.from({ length: n }, () => {
     const x = random() * 8_000;
     const y = random() * 6_000;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { calibrateEatonExponent, calibrateFracture, type CalibrationProfile, type ProfileObservation } from '@shared/profile/index';
 import { G, PSI_PA, FT_M, PPG_KGM3 } from '@shared/units/constants';
-import { seededRandom } from '../../bench/helpers/random';
+import { mulberry32 } from '@shared/random/mulberry32';
 
 // A synthetic well in SI: overburden from a 2,300 kg/m³ column under 100 m of water, brine hydrostatic at 1,030 kg/m³,
 // a sonic normal trend Δtₙ = 60 + 140·e^(−z/1500) µs/ft below the mudline and a log that departs from it below 2,500 m.
@@ -30,7 +30,7 @@ const test = (tvd: number, valueSi: number, kind: ProfileObservation['kind'] = '
 
 describe('calibrateEatonExponent', () => {
   it('recovers the exponent of synthetic formation tests with noise', () => {
-    const random = seededRandom(5);
+    const random = mulberry32(5);
     const depths = [1200, 1800, 2400, 2700, 2900, 3100, 3300, 3500, 3700, 3900];
     const tests = depths.map((z) => test(z, eatonTruth(z / 10, 3) + (random() - 0.5) * 0.6e6));
     const fit = calibrateEatonExponent(profileWith(sonic), tests, 'eaton-sonic');
@@ -86,7 +86,7 @@ describe('calibrateFracture', () => {
   });
 
   it("recovers a Poisson's ratio that rises with depth from noisy leak-off tests", () => {
-    const random = seededRandom(8);
+    const random = mulberry32(8);
     const pore = hydrostaticPa;
     const depths = [800, 1300, 1900, 2400, 3000, 3600];
     const lots = depths.map((z) => {
