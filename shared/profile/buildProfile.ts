@@ -9,7 +9,7 @@ import { wellDatums, type ProfileWell } from './datums';
 import { bridgeGaps } from './interpolate';
 import { runningMedian } from './smooth';
 import type { ProfileLogs } from './logGrid';
-import { fracturePressure, porePressure, type FractureSettings, type PoreSettings } from './methods';
+import { fracturePressure, PORE_METHOD_LABELS, porePressure, type FractureSettings, type PoreSettings } from './methods';
 import { trendR2, trendValues, type TrendSettings } from './trend';
 import { curveWindow, type DrillingWindow } from './window';
 
@@ -42,12 +42,6 @@ export const PROFILE_DEFAULTS = {
    */
   belowNormal: { marginKgM3: 0.3 * PPG_KGM3, minFraction: 0.2 },
 } as const;
-
-const METHOD_NAMES: Record<PoreSettings['method'], string> = {
-  'eaton-sonic': 'Eaton (sonic)',
-  'eaton-resistivity': 'Eaton (resistivity)',
-  bowers: 'Bowers',
-};
 
 /**
  * Share of the samples where `curvePa` has a value that sit more than `marginKgM3` of EMW below `normalPa`
@@ -309,7 +303,7 @@ export function buildProfile(input: BuildProfileInput): Profile {
           ? "calibrate A and B to this basin's formation tests"
           : 'check the normal trend and the exponent against formation tests';
       notes.push(
-        `Pore pressure from ${METHOD_NAMES[pore.method]} is below hydrostatic over ${Math.round(share.fraction * 100)} % of the logged interval: ${fix}.`,
+        `Pore pressure from ${PORE_METHOD_LABELS[pore.method].short} is below hydrostatic over ${Math.round(share.fraction * 100)} % of the logged interval: ${fix}.`,
       );
     }
   }

@@ -21,6 +21,13 @@ export type PoreSettings = (
   smoothingM?: number;
 };
 
+/** Each pore-pressure method's name in notes and tables, and its label where a user chooses it (with its source). */
+export const PORE_METHOD_LABELS: Record<PoreSettings['method'], { short: string; choice: string }> = {
+  'eaton-sonic': { short: 'Eaton (sonic)', choice: 'Eaton, sonic (Eaton 1975)' },
+  'eaton-resistivity': { short: 'Eaton (resistivity)', choice: 'Eaton, resistivity (Eaton 1975)' },
+  bowers: { short: 'Bowers', choice: 'Bowers, velocity–effective stress (Bowers 1995)' },
+};
+
 /** Fracture-pressure method as the interpretation stores it. */
 export type FractureSettings =
   { method: 'eaton'; poissonTop: number; poissonGradientPerKm: number } | { method: 'matthews-kelly'; ki: number };
