@@ -21,15 +21,6 @@ export async function fetchBasemapStyle(theme: 'light' | 'dark', client: ApiClie
 }
 
 /**
- * Wells whose name or UWI matches `q`, for the map's search box.
- * @example const { items } = await searchWells(teamId, 'AVX-1', 8);
- */
-export function searchWells(teamId: string, q: string, limit = 8, client: ApiClient = api): Promise<WellList> {
-  const search = new URLSearchParams({ q: q.trim(), limit: String(limit) });
-  return client.get(`${wellsPath(teamId)}?${search.toString()}`, wellListSchema);
-}
-
-/**
  * The first page of the team's wells (up to 500), to frame the map and place saved offsets.
  * @example const { total, items } = await listWellsForMap(teamId);
  */

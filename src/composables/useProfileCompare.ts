@@ -16,7 +16,7 @@ import {
 } from '@shared/profile';
 import * as wellsApi from '@/api/wells';
 import * as profileApi from '@/api/profile';
-import type { LoadState } from '@/stores/session';
+import { useRequest } from './useRequest';
 import { DATUM_LABELS, displayDepth, type DepthFrame } from '@/plots/depthFrame';
 import { pickCurves, profileWell } from './useProfileData';
 
@@ -133,27 +133,23 @@ export const emptyWindow = (): DrillingWindow => curveWindow([], [], []);
  * @example const cmp = useProfileCompare(teamId, ids); cmp.wells.value.map((w) => w.topTvdM);
  */
 export function useProfileCompare(teamId: Ref<string | null>, ids: Ref<string[]>) {
-  const state = ref<LoadState>('idle');
+  const request = useRequest(async (team: string | null, list: readonly string[]) => {
+    if (!team || list.length === 0) return [];
+    return Promise.allSettled(list.map((id) => loadOne(team, id)));
+  });
   const wells = shallowRef<CompareWell[]>([]);
   const failed = ref<{ id: string; message: string }[]>([]);
-  let latest = 0;
+
   async function reload(): Promise<void> {
-    const call = ++latest;
-    if (!teamId.value || ids.value.length === 0) {
-      wells.value = [];
-      state.value = 'done';
-      return;
-    }
-    state.value = 'loading';
-    const team = teamId.value;
-    const results = await Promise.allSettled(ids.value.map((id) => loadOne(team, id)));
-    if (call !== latest) return;
+    const list = [...ids.value];
+    const results = await request.run(teamId.value, list);
+    if (!results) return;
     wells.value = results.flatMap((r) => (r.status === 'fulfilled' ? [r.value] : []));
     failed.value = results.flatMap((r, i) =>
-      r.status === 'rejected' ? [{ id: ids.value[i], message: r.reason instanceof Error ? r.reason.message : String(r.reason) }] : [],
+      r.status === 'rejected' ? [{ id: list[i], message: r.reason instanceof Error ? r.reason.message : String(r.reason) }] : [],
     );
-    state.value = 'done';
   }
+
   watch([teamId, ids], () => void reload(), { immediate: true });
-  return { state, wells, failed, reload };
+  return { state: request.state, wells, failed, reload };
 }

@@ -1,4 +1,4 @@
-import { computed, ref, shallowRef, watch, type Ref } from 'vue';
+import { computed, watch, type Ref } from 'vue';
 import type { LogCurveData, LogCurveSummary, PressureObservation, SurveyStation, WellDetail } from '@shared/schemas/wells';
 import type { Interpretation } from '@shared/schemas/interpretations';
 import {
@@ -11,7 +11,7 @@ import {
 } from '@shared/profile';
 import * as wellsApi from '@/api/wells';
 import * as profileApi from '@/api/profile';
-import type { LoadState } from '@/stores/session';
+import { useRequest } from './useRequest';
 
 export const PROFILE_ROLES: readonly ProfileLogRole[] = ['sonic', 'resistivity', 'density', 'gamma'];
 
@@ -55,10 +55,11 @@ export interface ProfileData {
  * @example const data = useProfileData(teamId, wellId); await data.reload(); data.data.value?.aligned.tvdM
  */
 export function useProfileData(teamId: Ref<string | null>, wellId: Ref<string>) {
-  const state = ref<LoadState>('idle');
-  const error = ref<string | null>(null);
-  const data = shallowRef<ProfileData | null>(null);
-  let latest = 0;
+  const request = useRequest(async (team: string | null, id: string) => {
+    if (!team) throw new Error('No team selected');
+    return load(team, id);
+  });
+  const data = request.data;
 
   async function load(team: string, id: string): Promise<ProfileData> {
     const [well, pressures, stations, curveList, versions] = await Promise.all([
@@ -80,24 +81,7 @@ export function useProfileData(teamId: Ref<string | null>, wellId: Ref<string>) 
   }
 
   async function reload(): Promise<void> {
-    const call = ++latest;
-    if (!teamId.value) {
-      state.value = 'error';
-      error.value = 'No team selected';
-      return;
-    }
-    state.value = 'loading';
-    error.value = null;
-    try {
-      const result = await load(teamId.value, wellId.value);
-      if (call !== latest) return;
-      data.value = result;
-      state.value = 'done';
-    } catch (e) {
-      if (call !== latest) return;
-      error.value = e instanceof Error ? e.message : String(e);
-      state.value = 'error';
-    }
+    await request.run(teamId.value, wellId.value);
   }
 
   /** Only the versions list, after a save or restore. */
@@ -110,5 +94,5 @@ export function useProfileData(teamId: Ref<string | null>, wellId: Ref<string>) 
 
   watch([teamId, wellId], () => void reload());
 
-  return { state, error, data, reload, reloadVersions, well: computed(() => data.value?.well ?? null) };
+  return { state: request.state, error: request.error, data, reload, reloadVersions, well: computed(() => data.value?.well ?? null) };
 }

@@ -43,4 +43,20 @@ describe('useRequest', () => {
     expect(request.data.value).toBe('team B');
     expect(request.state.value).toBe('done');
   });
+
+  it('passes its arguments to the task and drops an answer that arrives after reset()', async () => {
+    const answer = deferred<string>();
+    const asked: string[] = [];
+    const request = useRequest((teamId: string) => {
+      asked.push(teamId);
+      return answer.promise;
+    });
+    const pending = request.run('team A');
+    request.reset();
+    answer.resolve('layers of A');
+    expect(await pending).toBeNull();
+    expect(asked).toEqual(['team A']);
+    expect(request.state.value).toBe('idle');
+    expect(request.data.value).toBeNull();
+  });
 });

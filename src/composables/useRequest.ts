@@ -5,21 +5,23 @@ import type { LoadState } from '@/stores/session';
  * One async request with an explicit state. Only the latest call may write its result, so a slow
  * answer for the previous team never overwrites the one for the team just switched to.
  * @example
- * const members = useRequest(() => listMembers(teamId.value));
- * await members.run(); members.state.value // 'done'
+ * const members = useRequest((teamId: string) => listMembers(teamId));
+ * await members.run(teamId); members.state.value // 'done'
+ * members.reset(); // back to idle; an answer still on its way is dropped
  */
-export function useRequest<T>(task: () => Promise<T>) {
+export function useRequest<T, A extends unknown[] = []>(task: (...args: A) => Promise<T>) {
   const state = ref<LoadState>('idle');
   const data = shallowRef<T | null>(null) as Ref<T | null>;
   const error = ref<string | null>(null);
   let latest = 0;
 
-  async function run(): Promise<T | null> {
+  /** Resolves to the answer, or null when the call failed or a later call (or reset) overtook it. */
+  async function run(...args: A): Promise<T | null> {
     const call = ++latest;
     state.value = 'loading';
     error.value = null;
     try {
-      const result = await task();
+      const result = await task(...args);
       if (call !== latest) return null;
       data.value = result;
       state.value = 'done';
@@ -32,5 +34,12 @@ export function useRequest<T>(task: () => Promise<T>) {
     }
   }
 
-  return { state, data, error, run };
+  function reset(): void {
+    latest += 1;
+    state.value = 'idle';
+    data.value = null;
+    error.value = null;
+  }
+
+  return { state, data, error, run, reset };
 }

@@ -1,9 +1,9 @@
-import { ref, shallowRef } from 'vue';
+import { shallowRef } from 'vue';
 import type { PlannedWell, Prospect } from '@shared/schemas/planning';
 import type { Surface, SurfaceSummary } from '@shared/schemas/surfaces';
 import { listPlannedWells } from '@/api/planning';
 import { deleteSurface, getProspect, getSurface, listSurfaces, plannedWellSurfaceValue } from '@/api/surfaces';
-import type { LoadState } from '@/stores/session';
+import { useRequest } from './useRequest';
 
 /** The surface at one planned well of the prospect, in the surface's SI unit (m, kg/m³ or Pa); nulls outside the grid. */
 export interface PlannedWellValue {
@@ -25,45 +25,35 @@ const message = (e: unknown) => (e instanceof Error ? e.message : String(e));
  * await runs.show(teamId, runs.list.value[0].id);
  */
 export function useSurfaceRuns() {
+  const loading = useRequest((teamId: string, prospectId: string) =>
+    Promise.all([getProspect(teamId, prospectId), listPlannedWells(teamId), listSurfaces(teamId, prospectId)]),
+  );
+  const showing = useRequest((teamId: string, surfaceId: string, known?: Surface) =>
+    known ? Promise.resolve(known) : getSurface(teamId, surfaceId),
+  );
   const prospect = shallowRef<Prospect | null>(null);
   const plannedWells = shallowRef<PlannedWell[]>([]);
   const list = shallowRef<SurfaceSummary[]>([]);
-  const state = ref<LoadState>('idle');
-  const error = ref<string | null>(null);
-  const current = shallowRef<Surface | null>(null);
-  const currentState = ref<LoadState>('idle');
-  const currentError = ref<string | null>(null);
   const plannedValues = shallowRef<PlannedWellValue[]>([]);
-  let latestShow = 0;
 
   async function load(teamId: string, prospectId: string): Promise<void> {
-    state.value = 'loading';
-    error.value = null;
-    try {
-      const [p, planned, runs] = await Promise.all([
-        getProspect(teamId, prospectId),
-        listPlannedWells(teamId),
-        listSurfaces(teamId, prospectId),
-      ]);
-      prospect.value = p;
-      plannedWells.value = planned.filter((w) => w.prospectId === prospectId);
-      list.value = runs;
-      state.value = 'done';
-    } catch (e) {
-      error.value = message(e);
-      state.value = 'error';
-    }
+    const found = await loading.run(teamId, prospectId);
+    if (!found) return;
+    const [p, planned, runs] = found;
+    prospect.value = p;
+    plannedWells.value = planned.filter((w) => w.prospectId === prospectId);
+    list.value = runs;
   }
 
   async function refreshList(teamId: string, prospectId: string): Promise<void> {
     try {
       list.value = await listSurfaces(teamId, prospectId);
     } catch (e) {
-      error.value = message(e);
+      loading.error.value = message(e);
     }
   }
 
-  async function loadPlannedValues(teamId: string, surface: Surface, call: number): Promise<void> {
+  async function loadPlannedValues(teamId: string, surface: Surface): Promise<void> {
     const values = await Promise.all(
       plannedWells.value.map(async (w) => {
         try {
@@ -74,38 +64,26 @@ export function useSurfaceRuns() {
         }
       }),
     );
-    if (call === latestShow) plannedValues.value = values;
+    // A later show (or clear) has replaced the surface meanwhile: these values belong to another.
+    if (showing.data.value === surface) plannedValues.value = values;
   }
 
   /** Shows a stored run; `known` skips the fetch when the surface is already at hand (a run just finished). */
   async function show(teamId: string, surfaceId: string, known?: Surface): Promise<void> {
-    const call = ++latestShow;
-    currentState.value = 'loading';
-    currentError.value = null;
-    try {
-      const surface = known ?? (await getSurface(teamId, surfaceId));
-      if (call !== latestShow) return;
-      current.value = surface;
-      currentState.value = 'done';
-      plannedValues.value = [];
-      await loadPlannedValues(teamId, surface, call);
-    } catch (e) {
-      if (call !== latestShow) return;
-      currentError.value = message(e);
-      currentState.value = 'error';
-    }
+    const surface = await showing.run(teamId, surfaceId, known);
+    if (!surface) return;
+    plannedValues.value = [];
+    await loadPlannedValues(teamId, surface);
   }
 
   function clear(): void {
-    latestShow++;
-    current.value = null;
-    currentState.value = 'idle';
+    showing.reset();
     plannedValues.value = [];
   }
 
   async function remove(teamId: string, prospectId: string, surfaceId: string): Promise<void> {
     await deleteSurface(teamId, surfaceId);
-    if (current.value?.id === surfaceId) clear();
+    if (showing.data.value?.id === surfaceId) clear();
     await refreshList(teamId, prospectId);
   }
 
@@ -113,11 +91,11 @@ export function useSurfaceRuns() {
     prospect,
     plannedWells,
     list,
-    state,
-    error,
-    current,
-    currentState,
-    currentError,
+    state: loading.state,
+    error: loading.error,
+    current: showing.data,
+    currentState: showing.state,
+    currentError: showing.error,
     plannedValues,
     load,
     refreshList,

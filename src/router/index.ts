@@ -1,5 +1,6 @@
 import { createRouter, createWebHistory, type Router, type RouterHistory } from 'vue-router';
 import { useSessionStore } from '@/stores/session';
+import { useTeamStore } from '@/stores/team';
 import { decideAccess } from './access';
 import { routes } from './routes';
 
@@ -14,7 +15,7 @@ export function createAppRouter(history: RouterHistory = createWebHistory()): Ro
     const session = useSessionStore();
     // The first navigation asks the server whether the cookie still holds a session.
     if (session.state === 'idle') await session.fetchMe();
-    return decideAccess(to, { signedIn: session.isSignedIn, can: (action) => session.can(action) });
+    return decideAccess(to, { signedIn: session.isSignedIn, can: (action) => useTeamStore().can(action) });
   });
 
   router.afterEach((to) => {

@@ -1,12 +1,9 @@
 // @vitest-environment happy-dom
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { createPinia, setActivePinia } from 'pinia';
-import { roleCan } from '@shared/auth/permissions';
-import { errorReply, installFakeServer, jsonReply, TEAM_B, twoTeamSession } from '@/testing/fakeServer';
+import { errorReply, installFakeServer, jsonReply, twoTeamSession } from '@/testing/fakeServer';
 import { useSessionStore } from './session';
-import { useTeamStore } from './team';
 
-// Expected permissions come from the shared permission table (roleCan), the same one the server enforces.
 describe('useSessionStore', () => {
   beforeEach(() => {
     localStorage.clear();
@@ -72,24 +69,5 @@ describe('useSessionStore', () => {
     await expect(session.signOut()).rejects.toBeTruthy();
     expect(session.isSignedIn).toBe(false);
     expect(session.memberships).toEqual([]);
-  });
-
-  it('answers can() for the current team only, following the shared permission table', async () => {
-    installFakeServer({ 'GET /api/auth/me': () => jsonReply(200, twoTeamSession) });
-    const session = useSessionStore();
-    await session.fetchMe();
-
-    // Team A first: admin.
-    expect(session.can('members.manage')).toBe(roleCan('admin', 'members.manage'));
-    expect(session.can('members.manage')).toBe(true);
-
-    useTeamStore().switchTeam(TEAM_B); // viewer there
-    expect(session.can('members.manage')).toBe(roleCan('viewer', 'members.manage'));
-    expect(session.can('members.manage')).toBe(false);
-    expect(session.can('team.read')).toBe(true);
-  });
-
-  it('can() is false for everything when signed out', () => {
-    expect(useSessionStore().can('team.read')).toBe(false);
   });
 });

@@ -1,10 +1,8 @@
 import { computed, ref } from 'vue';
 import { defineStore } from 'pinia';
-import { can as canDo, type Action } from '@shared/auth/permissions';
 import type { Membership, Session, SignInBody, User } from '@shared/schemas/auth';
 import * as authApi from '@/api/auth';
 import { ApiClientError } from '@/api/client';
-import { useTeamStore } from './team';
 
 /** Where a request stands; shared by stores and composables. */
 export type LoadState = 'idle' | 'loading' | 'done' | 'error';
@@ -14,7 +12,7 @@ export type LoadState = 'idle' | 'loading' | 'done' | 'error';
  * @example
  * const session = useSessionStore();
  * await session.signIn({ email, password });
- * session.can('members.manage') // for the current team
+ * session.isSignedIn // true
  */
 export const useSessionStore = defineStore('session', () => {
   const user = ref<User | null>(null);
@@ -85,11 +83,5 @@ export const useSessionStore = defineStore('session', () => {
     state.value = 'done';
   }
 
-  /** Whether the signed-in user may do `action` in the currently selected team. */
-  function can(action: Action): boolean {
-    const teamId = useTeamStore().currentTeamId;
-    return teamId !== null && canDo(memberships.value, action, teamId);
-  }
-
-  return { user, memberships, state, error, isSignedIn, applySession, signIn, signOut, fetchMe, forget, can };
+  return { user, memberships, state, error, isSignedIn, applySession, signIn, signOut, fetchMe, forget };
 });

@@ -1,6 +1,7 @@
 // @vitest-environment happy-dom
 import { beforeEach, describe, expect, it } from 'vitest';
 import { createPinia, setActivePinia } from 'pinia';
+import { roleCan } from '@shared/auth/permissions';
 import { STORAGE_KEYS } from '@/utils/storage';
 import { TEAM_A, TEAM_B, twoTeamSession } from '@/testing/fakeServer';
 import { useSessionStore } from './session';
@@ -52,5 +53,24 @@ describe('useTeamStore', () => {
     const team = useTeamStore();
     expect(() => team.switchTeam('someone-elses-team')).toThrow('Not a member of team someone-elses-team');
     expect(team.currentTeamId).toBe(TEAM_A);
+  });
+
+  // Expected permissions come from the shared permission table (roleCan), the same one the server enforces.
+  it('answers can() for the current team only, following the shared permission table', () => {
+    useSessionStore().applySession(twoTeamSession);
+    const team = useTeamStore();
+
+    // Team A first: admin.
+    expect(team.can('members.manage')).toBe(roleCan('admin', 'members.manage'));
+    expect(team.can('members.manage')).toBe(true);
+
+    team.switchTeam(TEAM_B); // viewer there
+    expect(team.can('members.manage')).toBe(roleCan('viewer', 'members.manage'));
+    expect(team.can('members.manage')).toBe(false);
+    expect(team.can('team.read')).toBe(true);
+  });
+
+  it('can() is false for everything when signed out', () => {
+    expect(useTeamStore().can('team.read')).toBe(false);
   });
 });

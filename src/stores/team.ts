@@ -1,6 +1,6 @@
 import { computed, ref } from 'vue';
 import { defineStore } from 'pinia';
-import type { Role } from '@shared/auth/permissions';
+import { can as canDo, type Action, type Role } from '@shared/auth/permissions';
 import type { Membership } from '@shared/schemas/auth';
 import { readStored, STORAGE_KEYS, writeStored } from '@/utils/storage';
 import { useSessionStore } from './session';
@@ -15,6 +15,7 @@ export const DEMO_TEAM_NAME = 'Synthetic demo';
  * const team = useTeamStore();
  * team.switchTeam(otherTeamId);
  * team.currentRole // 'planner'
+ * team.can('members.manage') // in the current team
  */
 export const useTeamStore = defineStore('team', () => {
   const session = useSessionStore();
@@ -38,5 +39,11 @@ export const useTeamStore = defineStore('team', () => {
     writeStored(STORAGE_KEYS.teamId, teamId);
   }
 
-  return { selectedTeamId, currentMembership, currentTeamId, currentTeamName, currentRole, isDemoTeam, switchTeam };
+  /** Whether the signed-in user may do `action` in the current team. */
+  function can(action: Action): boolean {
+    const teamId = currentTeamId.value;
+    return teamId !== null && canDo(session.memberships, action, teamId);
+  }
+
+  return { selectedTeamId, currentMembership, currentTeamId, currentTeamName, currentRole, isDemoTeam, switchTeam, can };
 });

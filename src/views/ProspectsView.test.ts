@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { flushPromises } from '@vue/test-utils';
 import { installFakeServer, jsonReply } from '@/testing/fakeServer';
 import { mountInApp } from '@/testing/mountInApp';
-import { useAtlasStore } from '@/stores/atlas';
+import { usePlanningStore } from '@/stores/planning';
 import ProspectsView from './ProspectsView.vue';
 
 const prospect = (id: string, name: string) => ({
@@ -30,9 +30,9 @@ describe('ProspectsView', () => {
   it('links each prospect to its own top-of-overpressure surface screen', async () => {
     installFakeServer({ 'GET /api/auth/me': () => jsonReply(401, { error: { code: 'unauthenticated', message: 'no' } }) });
     const { wrapper, router, pinia } = await mountInApp(ProspectsView, { path: '/sign-in' });
-    const atlas = useAtlasStore(pinia);
-    atlas.prospects = [prospect(A, 'Lantern Screen'), prospect(B, 'Harrow Fan')] as never;
-    atlas.state = 'done';
+    const plan = usePlanningStore(pinia);
+    plan.prospects = [prospect(A, 'Lantern Screen'), prospect(B, 'Harrow Fan')] as never;
+    plan.state = 'done';
     await flushPromises();
     const rows = wrapper.findAll('[data-testid="prospect-row"]');
     expect(rows.map((r) => r.attributes('data-id'))).toEqual([A, B]);

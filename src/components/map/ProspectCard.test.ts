@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { flushPromises } from '@vue/test-utils';
 import { installFakeServer, jsonReply, twoTeamSession } from '@/testing/fakeServer';
 import { mountInApp } from '@/testing/mountInApp';
-import { useAtlasStore } from '@/stores/atlas';
+import { usePlanningStore } from '@/stores/planning';
 import ProspectCard from './ProspectCard.vue';
 
 const PROSPECT = {
@@ -41,7 +41,7 @@ describe('ProspectCard', () => {
   it("links to the prospect's top-of-overpressure surface screen and gives the planned TD its datum", async () => {
     installFakeServer({ 'GET /api/auth/me': () => jsonReply(200, twoTeamSession) });
     const { wrapper, router, pinia } = await mountInApp(ProspectCard, { props: { prospect: PROSPECT }, path: '/map' });
-    useAtlasStore(pinia).plannedWells = [PLANNED as never];
+    usePlanningStore(pinia).plannedWells = [PLANNED as never];
     await flushPromises();
     const link = wrapper.get('[data-testid="prospect-surface-link"]');
     expect(link.text()).toContain('Top-of-overpressure surface');

@@ -14,7 +14,11 @@ import {
 } from '@shared/schemas/planning';
 import { wellSummarySchema, type WellSummary } from '@shared/schemas/wells';
 import { errorReply, installFakeServer, jsonReply, TEAM_A } from '@/testing/fakeServer';
-import { ATLAS_REFERENCE_TOGGLES_KEY, useAtlasStore } from './atlas';
+import { useOffsetMarks } from '@/composables/useOffsetMarks';
+import { useAtlasViewStore } from './atlasView';
+import { useOffsetPickingStore } from './offsetPicking';
+import { usePlanningStore } from './planning';
+import { ATLAS_REFERENCE_TOGGLES_KEY, useReferenceLayersStore } from './referenceLayers';
 
 // Fixtures are parsed with the shared contract schemas, so they have the shape the server sends.
 const PW = '11111111-1111-4111-8111-111111111111';
@@ -129,7 +133,7 @@ function server(extra: Record<string, (body: unknown) => Response> = {}) {
   });
 }
 
-describe('useAtlasStore', () => {
+describe('the Atlas stores', () => {
   beforeEach(() => {
     localStorage.clear();
     setActivePinia(createPinia());
@@ -138,15 +142,17 @@ describe('useAtlasStore', () => {
 
   it('loads the team and starts the picks from the saved offset set', async () => {
     server();
-    const atlas = useAtlasStore();
-    await atlas.load(TEAM_A);
-    expect(atlas.state).toBe('done');
-    expect(atlas.wellsTotal).toBe(2);
-    await atlas.selectPlannedWell(PW);
-    expect(atlas.picks).toEqual([{ wellId: W2, name: 'B-2', reason: 'same block' }]);
-    expect(atlas.offsetsDirty).toBe(false);
+    const plan = usePlanningStore();
+    const offsets = useOffsetPickingStore();
+    const { offsetGeoJson } = useOffsetMarks();
+    await plan.load(TEAM_A);
+    expect(plan.state).toBe('done');
+    expect(plan.wellsTotal).toBe(2);
+    await offsets.selectPlannedWell(PW);
+    expect(offsets.picks).toEqual([{ wellId: W2, name: 'B-2', reason: 'same block' }]);
+    expect(offsets.dirty).toBe(false);
     // Saved offsets show before any search, placed from the known wells, with a line from the planned well.
-    const kinds = atlas.offsetGeoJson.features.map((f) => `${f.properties.kind}:${f.properties.wellId}`);
+    const kinds = offsetGeoJson.value.features.map((f) => `${f.properties.kind}:${f.properties.wellId}`);
     expect(kinds).toEqual([`line:${W2}`, `candidate:${W2}`]);
   });
 
@@ -158,28 +164,29 @@ describe('useAtlasStore', () => {
         return jsonReply(200, [entry(w2, 'same block'), entry(w1, 'nearest')]);
       },
     });
-    const atlas = useAtlasStore();
-    await atlas.load(TEAM_A);
-    await atlas.selectPlannedWell(PW);
-    await atlas.searchOffsets({ radiusKm: 25 });
-    expect(atlas.candidates.map((c) => c.wellId)).toEqual([W1, W2]);
-    expect(atlas.offsetMarks.map((m) => [m.rank, m.picked])).toEqual([
+    const offsets = useOffsetPickingStore();
+    const { offsetMarks } = useOffsetMarks();
+    await usePlanningStore().load(TEAM_A);
+    await offsets.selectPlannedWell(PW);
+    await offsets.search({ radiusKm: 25 });
+    expect(offsets.candidates.map((c) => c.wellId)).toEqual([W1, W2]);
+    expect(offsetMarks.value.map((m) => [m.rank, m.picked])).toEqual([
       [1, false],
       [2, true],
     ]);
 
-    atlas.setPicked(W1, 'A-1', true);
-    atlas.setReason(W1, '  nearest ');
-    expect(atlas.offsetsDirty).toBe(true);
-    await atlas.saveOffsets();
+    offsets.setPicked(W1, 'A-1', true);
+    offsets.setReason(W1, '  nearest ');
+    expect(offsets.dirty).toBe(true);
+    await offsets.save();
     expect(sent).toEqual({
       wells: [
         { wellId: W2, reason: 'same block' },
         { wellId: W1, reason: 'nearest' },
       ],
     });
-    expect(atlas.offsetsDirty).toBe(false);
-    expect(atlas.candidates.every((c) => c.inOffsetSet)).toBe(true);
+    expect(offsets.dirty).toBe(false);
+    expect(offsets.candidates.every((c) => c.inOffsetSet)).toBe(true);
   });
 
   it('keeps the saved set when the server refuses, and reports the search error', async () => {
@@ -187,33 +194,33 @@ describe('useAtlasStore', () => {
       [`GET ${base}/planned-wells/${PW}/offset-candidates?radiusKm=25`]: () =>
         errorReply(400, 'invalid_query', 'radiusKm: must be at most 500 km'),
     });
-    const atlas = useAtlasStore();
-    await atlas.load(TEAM_A);
-    await atlas.selectPlannedWell(PW);
-    await atlas.searchOffsets({ radiusKm: 25 });
-    expect(atlas.candidatesState).toBe('error');
-    expect(atlas.candidatesError).toBe('radiusKm: must be at most 500 km');
-    expect(atlas.savedOffsets).toHaveLength(1);
+    const offsets = useOffsetPickingStore();
+    await usePlanningStore().load(TEAM_A);
+    await offsets.selectPlannedWell(PW);
+    await offsets.search({ radiusKm: 25 });
+    expect(offsets.candidatesState).toBe('error');
+    expect(offsets.candidatesError).toBe('radiusKm: must be at most 500 km');
+    expect(offsets.saved).toHaveLength(1);
   });
 
   it('bumps the tile version after an edit so the map refetches its tiles', async () => {
     server({ [`DELETE ${base}/prospects/${P1}`]: () => new Response(null, { status: 204 }) });
-    const atlas = useAtlasStore();
-    await atlas.load(TEAM_A);
-    const before = atlas.tileVersion;
-    await atlas.deleteProspect(P1);
-    expect(atlas.tileVersion).toBe(before + 1);
-    expect(atlas.prospects).toEqual([]);
+    const plan = usePlanningStore();
+    await plan.load(TEAM_A);
+    const before = plan.tileVersion;
+    await plan.deleteProspect(P1);
+    expect(plan.tileVersion).toBe(before + 1);
+    expect(plan.prospects).toEqual([]);
     // The planned well stays, without its prospect (as the server's ON DELETE SET NULL does).
-    expect(atlas.plannedWells[0].prospectId).toBeNull();
+    expect(plan.plannedWells[0].prospectId).toBeNull();
   });
 
   it('remembers the layer switches across visits', async () => {
     server();
-    useAtlasStore().setToggle('wellNames', false);
+    useAtlasViewStore().setToggle('wellNames', false);
     await Promise.resolve();
     setActivePinia(createPinia());
-    expect(useAtlasStore().toggles.wellNames).toBe(false);
+    expect(useAtlasViewStore().toggles.wellNames).toBe(false);
   });
 
   it('lists the reference layers, remembers their switches, and forgets a deleted one', async () => {
@@ -221,28 +228,51 @@ describe('useAtlasStore', () => {
       [`GET ${base}/layers`]: () => jsonReply(200, [blocks]),
       [`DELETE ${base}/layers/${L1}`]: () => new Response(null, { status: 204 }),
     });
-    const atlas = useAtlasStore();
-    await atlas.load(TEAM_A);
-    await vi.waitFor(() => expect(atlas.referenceState).toBe('done'));
-    expect(atlas.referenceLayers.map((l) => l.name)).toEqual(['Blocks']);
-    atlas.setReferenceToggle(L1, false);
+    const references = useReferenceLayersStore();
+    await usePlanningStore().load(TEAM_A);
+    await references.load(TEAM_A);
+    expect(references.state).toBe('done');
+    expect(references.layers.map((l) => l.name)).toEqual(['Blocks']);
+    references.setToggle(L1, false);
     await Promise.resolve();
     expect(JSON.parse(localStorage.getItem(ATLAS_REFERENCE_TOGGLES_KEY) ?? '{}')).toEqual({ [L1]: false });
     setActivePinia(createPinia());
-    const again = useAtlasStore();
-    expect(again.referenceToggles[L1]).toBe(false);
+    const again = useReferenceLayersStore();
+    expect(again.toggles[L1]).toBe(false);
+    await usePlanningStore().load(TEAM_A);
     await again.load(TEAM_A);
-    await again.deleteReferenceLayer(L1);
-    expect(again.referenceLayers).toEqual([]);
-    expect(again.referenceToggles).toEqual({});
+    await again.remove(L1);
+    expect(again.layers).toEqual([]);
+    expect(again.toggles).toEqual({});
   });
 
   it('keeps the map when the layer list fails, reporting it apart', async () => {
     server({ [`GET ${base}/layers`]: () => errorReply(500, 'internal', 'Something broke.') });
-    const atlas = useAtlasStore();
-    await atlas.load(TEAM_A);
-    await vi.waitFor(() => expect(atlas.referenceState).toBe('error'));
-    expect(atlas.state).toBe('done');
-    expect(atlas.referenceError).toBe('Something broke.');
+    const plan = usePlanningStore();
+    const references = useReferenceLayersStore();
+    await Promise.all([plan.load(TEAM_A), references.load(TEAM_A)]);
+    expect(references.state).toBe('error');
+    expect(plan.state).toBe('done');
+    expect(references.error).toBe('Something broke.');
+  });
+
+  it('drops the offset set of a planned well deselected before it arrived', async () => {
+    server();
+    const offsets = useOffsetPickingStore();
+    await usePlanningStore().load(TEAM_A);
+    const pending = offsets.selectPlannedWell(PW);
+    await offsets.selectPlannedWell(null);
+    await pending;
+    expect(offsets.picks).toEqual([]);
+    expect(offsets.savedState).toBe('idle');
+  });
+
+  it('opens a new team with nothing selected', async () => {
+    server();
+    const view = useAtlasViewStore();
+    view.select({ prospectId: P1 });
+    await usePlanningStore().load(TEAM_A);
+    expect(view.selection.prospectId).toBeNull();
+    expect(view.teamId).toBe(TEAM_A);
   });
 });
