@@ -133,21 +133,25 @@ export const emptyWindow = (): DrillingWindow => curveWindow([], [], []);
  * @example const cmp = useProfileCompare(teamId, ids); cmp.wells.value.map((w) => w.topTvdM);
  */
 export function useProfileCompare(teamId: Ref<string | null>, ids: Ref<string[]>) {
-  const request = useRequest(async (team: string | null, list: readonly string[]) => {
-    if (!team || list.length === 0) return [];
-    return Promise.allSettled(list.map((id) => loadOne(team, id)));
-  });
   const wells = shallowRef<CompareWell[]>([]);
   const failed = ref<{ id: string; message: string }[]>([]);
+  const request = useRequest(
+    async (team: string | null, list: readonly string[]) => {
+      if (!team || list.length === 0) return [];
+      return Promise.allSettled(list.map((id) => loadOne(team, id)));
+    },
+    {
+      onDone: (results, _team, list) => {
+        wells.value = results.flatMap((r) => (r.status === 'fulfilled' ? [r.value] : []));
+        failed.value = results.flatMap((r, i) =>
+          r.status === 'rejected' ? [{ id: list[i], message: r.reason instanceof Error ? r.reason.message : String(r.reason) }] : [],
+        );
+      },
+    },
+  );
 
   async function reload(): Promise<void> {
-    const list = [...ids.value];
-    const results = await request.run(teamId.value, list);
-    if (!results) return;
-    wells.value = results.flatMap((r) => (r.status === 'fulfilled' ? [r.value] : []));
-    failed.value = results.flatMap((r, i) =>
-      r.status === 'rejected' ? [{ id: list[i], message: r.reason instanceof Error ? r.reason.message : String(r.reason) }] : [],
-    );
+    await request.run(teamId.value, [...ids.value]);
   }
 
   watch([teamId, ids], () => void reload(), { immediate: true });

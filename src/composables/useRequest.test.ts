@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { nextTick, ref, watch } from 'vue';
 import { ApiClientError } from '@/api/client';
 import { useRequest } from './useRequest';
 
@@ -58,5 +59,17 @@ describe('useRequest', () => {
     expect(asked).toEqual(['team A']);
     expect(request.state.value).toBe('idle');
     expect(request.data.value).toBeNull();
+  });
+
+  it('applies onDone before a watcher of the state sees done', async () => {
+    const shown = ref<string[]>([]);
+    const seen: string[][] = [];
+    const request = useRequest(async () => ['Blocks'], { onDone: (layers) => (shown.value = layers) });
+    watch(request.state, (s) => {
+      if (s === 'done') seen.push(shown.value);
+    });
+    await request.run();
+    await nextTick();
+    expect(seen).toEqual([['Blocks']]);
   });
 });

@@ -8,8 +8,15 @@ import type { LoadState } from '@/stores/session';
  * const members = useRequest((teamId: string) => listMembers(teamId));
  * await members.run(teamId); members.state.value // 'done'
  * members.reset(); // back to idle; an answer still on its way is dropped
+ * useRequest(listLayers, { onDone: (layers) => (shown.value = layers) }); // data kept elsewhere too
  */
-export function useRequest<T, A extends unknown[] = []>(task: (...args: A) => Promise<T>) {
+export function useRequest<T, A extends unknown[] = []>(
+  task: (...args: A) => Promise<T>,
+  options: {
+    /** Puts the answer where it belongs in the same tick as `state` turns 'done', so no watcher sees 'done' without it. */
+    onDone?: (result: T, ...args: A) => void;
+  } = {},
+) {
   const state = ref<LoadState>('idle');
   const data = shallowRef<T | null>(null) as Ref<T | null>;
   const error = ref<string | null>(null);
@@ -24,6 +31,7 @@ export function useRequest<T, A extends unknown[] = []>(task: (...args: A) => Pr
       const result = await task(...args);
       if (call !== latest) return null;
       data.value = result;
+      options.onDone?.(result, ...args);
       state.value = 'done';
       return result;
     } catch (e) {

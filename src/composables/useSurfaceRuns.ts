@@ -25,24 +25,28 @@ const message = (e: unknown) => (e instanceof Error ? e.message : String(e));
  * await runs.show(teamId, runs.list.value[0].id);
  */
 export function useSurfaceRuns() {
-  const loading = useRequest((teamId: string, prospectId: string) =>
-    Promise.all([getProspect(teamId, prospectId), listPlannedWells(teamId), listSurfaces(teamId, prospectId)]),
-  );
-  const showing = useRequest((teamId: string, surfaceId: string, known?: Surface) =>
-    known ? Promise.resolve(known) : getSurface(teamId, surfaceId),
-  );
   const prospect = shallowRef<Prospect | null>(null);
   const plannedWells = shallowRef<PlannedWell[]>([]);
   const list = shallowRef<SurfaceSummary[]>([]);
   const plannedValues = shallowRef<PlannedWellValue[]>([]);
+  const loading = useRequest(
+    (teamId: string, prospectId: string) =>
+      Promise.all([getProspect(teamId, prospectId), listPlannedWells(teamId), listSurfaces(teamId, prospectId)]),
+    {
+      onDone: ([p, planned, runs], _teamId, prospectId) => {
+        prospect.value = p;
+        plannedWells.value = planned.filter((w) => w.prospectId === prospectId);
+        list.value = runs;
+      },
+    },
+  );
+  const showing = useRequest(
+    (teamId: string, surfaceId: string, known?: Surface) => (known ? Promise.resolve(known) : getSurface(teamId, surfaceId)),
+    { onDone: () => (plannedValues.value = []) },
+  );
 
   async function load(teamId: string, prospectId: string): Promise<void> {
-    const found = await loading.run(teamId, prospectId);
-    if (!found) return;
-    const [p, planned, runs] = found;
-    prospect.value = p;
-    plannedWells.value = planned.filter((w) => w.prospectId === prospectId);
-    list.value = runs;
+    await loading.run(teamId, prospectId);
   }
 
   async function refreshList(teamId: string, prospectId: string): Promise<void> {
@@ -71,9 +75,7 @@ export function useSurfaceRuns() {
   /** Shows a stored run; `known` skips the fetch when the surface is already at hand (a run just finished). */
   async function show(teamId: string, surfaceId: string, known?: Surface): Promise<void> {
     const surface = await showing.run(teamId, surfaceId, known);
-    if (!surface) return;
-    plannedValues.value = [];
-    await loadPlannedValues(teamId, surface);
+    if (surface) await loadPlannedValues(teamId, surface);
   }
 
   function clear(): void {

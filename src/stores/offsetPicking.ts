@@ -30,8 +30,8 @@ const picksOf = (saved: readonly OffsetSetEntry[]): OffsetPick[] =>
 export const useOffsetPickingStore = defineStore('offsetPicking', () => {
   const view = useAtlasViewStore();
   const candidatesRequest = useRequest(planning.listOffsetCandidates);
-  const savedRequest = useRequest(planning.getOffsetSet);
   const picks = ref<OffsetPick[]>([]);
+  const savedRequest = useRequest(planning.getOffsetSet, { onDone: (found) => (picks.value = picksOf(found)) });
 
   const candidates = computed(() => candidatesRequest.data.value ?? []);
   const saved = computed(() => savedRequest.data.value ?? []);
@@ -50,8 +50,7 @@ export const useOffsetPickingStore = defineStore('offsetPicking', () => {
     view.select({ plannedWellId: id, hoverWellId: null });
     reset();
     if (!id) return;
-    const found = await savedRequest.run(view.requireTeam(), id);
-    if (found) picks.value = picksOf(found);
+    await savedRequest.run(view.requireTeam(), id);
   }
 
   async function search(query: planning.OffsetSearch): Promise<void> {

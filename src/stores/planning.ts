@@ -28,7 +28,6 @@ async function fetchTeamPlan(teamId: string) {
 export const usePlanningStore = defineStore('planning', () => {
   const view = useAtlasViewStore();
   const offsets = useOffsetPickingStore();
-  const request = useRequest(fetchTeamPlan);
   const prospects = ref<Prospect[]>([]);
   const plannedWells = ref<PlannedWell[]>([]);
   const wells = shallowRef<WellSummary[]>([]);
@@ -38,6 +37,14 @@ export const usePlanningStore = defineStore('planning', () => {
    * reloaded page never asks again for a `?v=` URL the browser already holds from before the reload.
    */
   const tileVersion = ref(Date.now());
+  const request = useRequest(fetchTeamPlan, {
+    onDone: (found) => {
+      prospects.value = found.prospects;
+      plannedWells.value = found.plannedWells;
+      wells.value = found.wells.items;
+      wellsTotal.value = found.wells.total;
+    },
+  });
 
   const wellsById = computed(() => new Map(wells.value.map((w) => [w.id, w])));
   const selectedPlannedWell = computed(() => plannedWells.value.find((p) => p.id === view.selection.plannedWellId) ?? null);
@@ -47,12 +54,7 @@ export const usePlanningStore = defineStore('planning', () => {
   async function load(teamId: string): Promise<void> {
     view.open(teamId);
     offsets.reset();
-    const found = await request.run(teamId);
-    if (!found) return;
-    prospects.value = found.prospects;
-    plannedWells.value = found.plannedWells;
-    wells.value = found.wells.items;
-    wellsTotal.value = found.wells.total;
+    await request.run(teamId);
   }
 
   function bumpTiles(): void {

@@ -20,15 +20,14 @@ export const ATLAS_REFERENCE_TOGGLES_KEY = 'porelith.atlas.referenceLayers';
  */
 export const useReferenceLayersStore = defineStore('referenceLayers', () => {
   const view = useAtlasViewStore();
-  const list = useRequest((teamId: string) => layersApi.listReferenceLayers(teamId));
   const layers = ref<ReferenceLayer[]>([]);
+  const list = useRequest((teamId: string) => layersApi.listReferenceLayers(teamId), { onDone: (found) => (layers.value = found) });
   const toggles = ref<ReferenceToggles>(readReferenceToggles(readStored(ATLAS_REFERENCE_TOGGLES_KEY)));
   watch(toggles, (t) => writeStored(ATLAS_REFERENCE_TOGGLES_KEY, JSON.stringify(t)), { deep: true });
 
   async function load(teamId: string): Promise<void> {
     layers.value = [];
-    const found = await list.run(teamId);
-    if (found) layers.value = found;
+    await list.run(teamId);
   }
 
   /** Uploads a layer and shows it at once; rejects with the server's ApiClientError, which names the feature or field. */

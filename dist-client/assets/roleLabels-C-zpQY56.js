@@ -1,0 +1,1 @@
+var e={admin:`Admin`,geoscientist:`Geoscientist`,planner:`Well planner`,viewer:`Viewer`};export{e as t};

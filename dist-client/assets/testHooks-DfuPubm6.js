@@ -1,0 +1,1 @@
+function e(e,t={}){return{...t,"data-testid":e}}export{e as t};
