@@ -1,1 +1,0 @@
-import{On as e,_t as t}from"./_plugin-vue_export-helper-C4XqT5Hd.js";import{C as n}from"./index-KegDRDt8.js";function r(){let r=e(n,null);return r===null&&t(`use-dialog`,`No outer <n-dialog-provider /> founded.`),r}export{r as t};

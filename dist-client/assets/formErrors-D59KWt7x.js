@@ -1,1 +1,0 @@
-function e(e){let t=Array.isArray(e)?[...e]:e.issues.map(e=>({path:e.path.map(String).join(`.`),message:e.message})),n={};for(let e of t){let t=e.path.split(`.`)[0]??``;t&&!(t in n)&&(n[t]=e.message)}return n}export{e as t};

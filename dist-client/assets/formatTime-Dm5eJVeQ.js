@@ -1,1 +1,0 @@
-var e=new Intl.DateTimeFormat(void 0,{dateStyle:`medium`,timeStyle:`short`}),t=new Intl.DateTimeFormat(void 0,{dateStyle:`medium`});function n(t){let n=new Date(t);return Number.isNaN(n.getTime())?t:e.format(n)}function r(e){let n=new Date(e);return Number.isNaN(n.getTime())?e:t.format(n)}export{n,r as t};

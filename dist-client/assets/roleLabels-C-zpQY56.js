@@ -1,1 +1,0 @@
-var e={admin:`Admin`,geoscientist:`Geoscientist`,planner:`Well planner`,viewer:`Viewer`};export{e as t};

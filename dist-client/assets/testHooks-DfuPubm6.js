@@ -1,1 +1,0 @@
-function e(e,t={}){return{...t,"data-testid":e}}export{e as t};

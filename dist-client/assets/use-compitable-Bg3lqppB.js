@@ -1,1 +1,0 @@
-import{gn as e}from"./_plugin-vue_export-helper-C4XqT5Hd.js";function t(t,n){return e(()=>{for(let e of n)if(t[e]!==void 0)return t[e];return t[n[n.length-1]]})}export{t};
